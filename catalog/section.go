@@ -5,11 +5,11 @@ type Shape int
 
 // The section shapes of DESIGN.md §4.5.
 const (
-	ShapeC      Shape = iota + 1 // lipped channel
-	ShapeZ                       // lipped Z (unequal flanges allowed, for nesting at laps)
-	Shape2C                      // two lipped channels back to back
-	ShapeStrap                   // flat strap (tension only)
-	ShapeRod                     // round rod (tension only), threaded ends
+	ShapeC     Shape = iota + 1 // lipped channel
+	ShapeZ                      // lipped Z (unequal flanges allowed, for nesting at laps)
+	Shape2C                     // two lipped channels back to back
+	ShapeStrap                  // flat strap (tension only)
+	ShapeRod                    // round rod (tension only), threaded ends
 )
 
 // Geometry is a section's nominal dimensions as rolled, in mm: outside
@@ -33,7 +33,7 @@ type Properties struct {
 	MassKgPerM float64 // at 7850 kg/m³
 
 	// Centroid measured from the web's centreline (x, towards the flange tips
-	// of a C) and from mid-depth (y).
+	// of a C; from the back-to-back plane of a 2C) and from mid-depth (y).
 	CentroidXMM float64
 	CentroidYMM float64
 
@@ -53,26 +53,28 @@ type Properties struct {
 	JMM4  float64 // St Venant torsion constant
 	IwMM6 float64 // warping constant about the shear centre
 
-	// Shear centre relative to the centroid (x0, y0).
+	// Shear centre relative to the centroid (x0, y0); a C's x0 is negative
+	// (behind the web).
 	ShearCentreXMM float64
 	ShearCentreYMM float64
 	// RO1MM is the polar radius of gyration about the shear centre,
 	// sqrt(rx² + ry² + x0² + y0²) (AS/NZS 4600:2018 cl. 3.3.3.2.1).
 	RO1MM float64
-	// Monosymmetry constants βx, βy where the section is monosymmetric
-	// about the other axis; zero where it is symmetric.
+	// Monosymmetry constants βx, βy (AS/NZS 4600:2018 cl. 3.3.3.2.1), with
+	// this package's axes (a C's βy > 0); zero where the section is symmetric
+	// about that axis (C: βx; Z and 2C: both).
 	BetaXMM float64
 	BetaYMM float64
 
-	// TensileStressAreaMM2 is a rod's threaded stress area (ISO 898-1);
-	// the gross area for other shapes.
+	// TensileStressAreaMM2 is a rod's threaded stress area (ISO 898-1:2013
+	// cl. 9.1.6.1, coarse pitch of ISO 261); the gross area for other shapes.
 	TensileStressAreaMM2 float64
 }
 
 // Section is one catalogue entry: designation, shape, geometry, steel and
 // computed properties.
 type Section struct {
-	Designation string // e.g. C200x76x1.9, Z250x2.4, 2C300x3.0
+	Designation string // e.g. C200x75x1.9, Z250x2.4, 2C300x3.0, STRAP30x1.0, ROD12
 	Shape       Shape
 	Geometry
 	FyMPa float64 // minimum yield stress
