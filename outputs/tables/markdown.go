@@ -1,0 +1,113 @@
+package tables
+
+import (
+	"bufio"
+	"fmt"
+	"io"
+	"strings"
+)
+
+// WriteMarkdown writes the whole set: title, caution, assumptions, every
+// table with its footnotes, and the caution again.
+func (s *Set) WriteMarkdown(w io.Writer, a Assumptions) error {
+	bw := bufio.NewWriter(w)
+	title := a.Title
+	if title == "" {
+		title = "Span tables"
+	}
+	fmt.Fprintf(bw, "# %s\n\n> %s\n\n", mdEscape(title), Caution)
+	for _, sec := range headerSections(a, s) {
+		fmt.Fprintf(bw, "## %s\n\n", sec.Heading)
+		for _, it := range sec.Items {
+			fmt.Fprintf(bw, "- %s\n", mdEscape(it))
+		}
+		fmt.Fprintln(bw)
+	}
+	for i := range s.Tables {
+		fmt.Fprintf(bw, "## %s\n\n", mdEscape(s.Title(&s.Tables[i])))
+		s.writeMarkdownGrid(bw, &s.Tables[i])
+		fmt.Fprintln(bw)
+	}
+	fmt.Fprintf(bw, "> %s\n", Caution)
+	if err := bw.Flush(); err != nil {
+		return fmt.Errorf("span tables: markdown: %w", err)
+	}
+	return nil
+}
+
+// WriteMarkdownTable writes one table and its footnotes, followed by the
+// caution: the README excerpt.
+func (s *Set) WriteMarkdownTable(w io.Writer, t *Table) error {
+	bw := bufio.NewWriter(w)
+	fmt.Fprintf(bw, "**%s**\n\n", mdEscape(s.Title(t)))
+	s.writeMarkdownGrid(bw, t)
+	fmt.Fprintf(bw, "\n> %s\n", Caution)
+	if err := bw.Flush(); err != nil {
+		return fmt.Errorf("span tables: markdown: %w", err)
+	}
+	return nil
+}
+
+func (s *Set) writeMarkdownGrid(w io.Writer, t *Table) {
+	numbers, list := notes(t)
+	fmt.Fprint(w, "| Span \\ Length |")
+	for _, c := range t.Columns {
+		fmt.Fprintf(w, " %s |", mdEscape(c.Label()))
+	}
+	fmt.Fprint(w, "\n|---|")
+	for range t.Columns {
+		fmt.Fprint(w, "---|")
+	}
+	fmt.Fprintln(w)
+	for i, row := range t.Cells {
+		fmt.Fprintf(w, "| **%s** |", spanText(t.SpansM[i]))
+		for j, c := range row {
+			fmt.Fprintf(w, " %s |", mdEscape(strings.Join(cellLines(c, numbers[i][j]), "<br>")))
+		}
+		fmt.Fprintln(w)
+	}
+	if len(list) > 0 {
+		fmt.Fprintln(w)
+	}
+	for _, n := range list {
+		fmt.Fprintf(w, "%d. %s %s: %s\n", n.N, markNoSolution, mdEscape(n.Where), mdEscape(n.Reason))
+	}
+}
+
+// mdEscape keeps a table cell in one piece: pipes and newlines would break it.
+func mdEscape(s string) string {
+	return strings.NewReplacer("|", "\\|", "\n", " ").Replace(s)
+}
+
+// section is one titled list of the page header.
+type section struct {
+	Heading string
+	Items   []string
+}
+
+// headerSections is the page header shared by the Markdown and HTML pages.
+func headerSections(a Assumptions, s *Set) []section {
+	var about []string
+	for _, f := range []struct{ label, value string }{
+		{"Maker", a.Maker}, {"Generated", a.Generated}, {"Program version", a.Version},
+		{"Grid", a.Grid}, {"Catalogue", a.Catalogue},
+	} {
+		if f.value != "" {
+			about = append(about, f.label+": "+f.value)
+		}
+	}
+	var out []section
+	for _, sec := range []section{
+		{"About these tables", about},
+		{"Standards and editions", a.Standards},
+		{"Defaults", a.Defaults},
+		{"Limit-state criteria", a.LimitStates},
+		{"Notes", a.Notes},
+		{"Reading the tables", s.StandardNotes()},
+	} {
+		if len(sec.Items) > 0 {
+			out = append(out, sec)
+		}
+	}
+	return out
+}
