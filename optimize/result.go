@@ -68,6 +68,7 @@ type MemberGroup struct {
 	SpacingM    float64 // purlins and girts: centre-to-centre spacing; 0 otherwise
 	SpanType    string  // purlins and girts: "simple", "continuous" or "lapped"
 	Bridging    int     // purlins and girts: bridging rows per span
+	Lines       int     // purlins and girts: runs along the building (both slopes or walls)
 	Count       int     // pieces in the building
 	LengthEachM float64 // cut length of one piece
 	MassKg      float64 // mass of all pieces (laps included)
@@ -114,6 +115,9 @@ type Result struct {
 	MassPerFloorKgM2 float64 // steel mass over span × length
 	Cost             float64 // from the grid's price table; 0 without one
 	Analyses         int     // frame analyses the search ran
+
+	// Calculation is the full working, kept only with Settings.Record.
+	Calculation *Calculation
 }
 
 // Member returns the group with the given role, or a zero group.
