@@ -64,10 +64,12 @@ func deriveActions(c grids.Case) (*caseActions, error) {
 	// The hoist hangs from the rafter at mid-span (the apex), the most
 	// severe position for the rafter and the frame: stated assumption.
 	hoist := actions.Hoist{LoadKN: c.HoistKN, PositionM: c.SpanM / 2}
-	if err := hoist.Validate(c.SpanM); err != nil {
-		return nil, fmt.Errorf("hoist: %w", err)
-	}
 	hasHoist := c.HoistKN > 0
+	if hasHoist {
+		if err := hoist.Validate(c.SpanM); err != nil {
+			return nil, fmt.Errorf("hoist: %w", err)
+		}
+	}
 	return &caseActions{
 		Building: b, Enclosure: enc, Wind: wl, Dead: dead, Hoist: hoist, RoofLiveKPa: live,
 		Primaries:    actions.Primaries(wl, hasHoist),
