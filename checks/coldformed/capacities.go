@@ -108,6 +108,16 @@ func SectionCapacities(sec catalog.Section) (Capacities, error) {
 		c.FodBeamTop = DistortionalStressBeam(bTop, lip, bw, t)
 		c.FodBeamBot = DistortionalStressBeam(bBot, lip, bw, t)
 		c.FodColumn = math.Min(DistortionalStressColumn(bTop, lip, bw, t), DistortionalStressColumn(bBot, lip, bw, t))
+		if m.sinLip < 0.999 {
+			// Sloping lips: the closed form overestimates f_od by about 21 %
+			// against the finite-strip values printed for 8ZS2.25x059
+			// (AISI DSM Design Guide Ex 8.5-3, S9; AISI Manual II-2B, S10).
+			// Until a finite-strip solver is in, f_od is divided by
+			// slopingLipFodKnockdown, a conservative calibration.
+			c.FodBeamTop /= slopingLipFodKnockdown
+			c.FodBeamBot /= slopingLipFodKnockdown
+			c.FodColumn /= slopingLipFodKnockdown
+		}
 		my := sec.ZxMM3 * fy
 		c.MbdTop = DistortionalBeamCapacity(my, sec.ZxMM3*c.FodBeamTop)
 		c.MbdBot = DistortionalBeamCapacity(my, sec.ZxMM3*c.FodBeamBot)
@@ -167,3 +177,8 @@ func shearCapacity(d1, t, fy float64) float64 {
 		return vcr
 	}
 }
+
+// slopingLipFodKnockdown divides the Appendix D f_od of sections with
+// sloping lips (Z purlins): 1.25 covers the 1.21 overestimate measured on
+// 8ZS2.25x059 against its published finite-strip values.
+const slopingLipFodKnockdown = 1.25

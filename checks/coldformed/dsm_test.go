@@ -64,8 +64,9 @@ func TestDistortionalStressAgainstFiniteStrip(t *testing.T) {
 	// P_crd = 0.27P_y (DSM Guide 8.1-4, S9) and M_crd = 0.85M_y (AISI
 	// Manual I-8B, S10); 8ZS2.25x059 P_crd = 0.287P_y (DSM Guide 8.5-3, S9)
 	// and M_crd = 0.77M_y (Manual II-2B, S10). So f_od = ratio × 55 ksi.
-	// Tolerance: 12% for the C (a closed form against finite strips); 25%
-	// for the Z, whose 50° lips enter with their normal depth.
+	// Tolerance: 12% for the C (a closed form against finite strips); 12%
+	// for the Z too, after the sloping-lip knockdown (capacities.go), which
+	// must leave the Z's f_od at or below the finite-strip value.
 	c, z := mustCaps(t, aisi9CS()), mustCaps(t, aisi8ZS())
 	cases := []struct {
 		name      string
@@ -74,8 +75,11 @@ func TestDistortionalStressAgainstFiniteStrip(t *testing.T) {
 	}{
 		{"9CS column f_od", c.FodColumn, 0.27 * 55 * ksi, 0.12},
 		{"9CS beam f_od", c.FodBeamTop, 0.85 * 55 * ksi, 0.12},
-		{"8ZS column f_od", z.FodColumn, 0.287 * 55 * ksi, 0.25},
-		{"8ZS beam f_od", z.FodBeamTop, 0.77 * 55 * ksi, 0.25},
+		{"8ZS column f_od", z.FodColumn, 0.287 * 55 * ksi, 0.12},
+		{"8ZS beam f_od", z.FodBeamTop, 0.77 * 55 * ksi, 0.12},
+	}
+	if z.FodBeamTop > 0.77*55*ksi*1.001 {
+		t.Errorf("8ZS beam f_od %.1f MPa above the finite-strip %.1f MPa: the knockdown is not conservative", z.FodBeamTop, 0.77*55*ksi)
 	}
 	for _, cs := range cases {
 		if !within(cs.got, cs.want, cs.tol) {
