@@ -192,3 +192,22 @@ func TestContinuousBeams(t *testing.T) {
 		})
 	}
 }
+
+// TestSpringSupport: a simple beam whose right support is a Y spring k carries P at mid-span;
+// statics gives the spring force P/2 (the beam is determinate), so the spring shortens P/(2k)
+// and the mid-span deflection is PL³/48EI plus half the support settlement (AISC beam formulas,
+// S12, plus rigid-body motion).
+func TestSpringSupport(t *testing.T) {
+	const P, k = 5000.0, 2000.0 // N, N/mm
+	f := beamLine(tL, 1)
+	f.Supports = []Support{PinnedSupport(0), {Node: 1, Spring: [3]float64{0, k, 0}}}
+	var ws Workspace
+	s, err := ws.Solve(f, []LoadCase{{Name: "P", Members: []MemberLoad{PointLoad(0, tL/2, GlobalAxes, 0, -P)}}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	one := Primary(0)
+	near(t, "spring reaction", s.Reaction(one, 1)[1], P/2, 1e-12)
+	near(t, "spring settlement", -s.Displacement(one, 1)[1], P/(2*k), 1e-12)
+	near(t, "mid-span deflection", -s.DeflectionAt(one, 0, tL/2).Uy, P*tL*tL*tL/(48*tE*tI)+P/(4*k), 1e-12)
+}
