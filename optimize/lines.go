@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 	"slices"
+	"strings"
+	"sync"
 
 	"github.com/spansweep/spansweep/catalog"
 	"github.com/spansweep/spansweep/checks/actions"
@@ -250,9 +252,28 @@ func (d *designer) arrangements(p lineProblem) []arrangement {
 	return out
 }
 
+type lineSectionsKey struct {
+	cat      *catalog.Catalogue
+	families string
+	costs    *grids.Costs
+}
+
+var lineSectionsCache sync.Map // lineSectionsKey → []catalog.Section
+
 // lineSections returns the candidate sections of the allowed families,
-// lightest first.
+// cheapest first (lightest first without a price table), built once per
+// catalogue, family list and price table.
 func (d *designer) lineSections(families []string) []catalog.Section {
+	key := lineSectionsKey{cat: d.cat, families: strings.Join(families, ","), costs: d.c.Options.Costs}
+	if v, ok := lineSectionsCache.Load(key); ok {
+		return v.([]catalog.Section)
+	}
+	out := d.sortedLineSections(families)
+	lineSectionsCache.Store(key, out)
+	return out
+}
+
+func (d *designer) sortedLineSections(families []string) []catalog.Section {
 	var out []catalog.Section
 	for _, f := range families {
 		switch f {
@@ -388,13 +409,18 @@ func (d *designer) checkLine(p lineProblem, arr arrangement, sec catalog.Section
 			v.governing = g
 		}
 	}
-	for _, a := range d.lineActions(p, arr, sec) {
+	acts := d.lineActions(p, arr, sec)
+	if !keep {
+		// The deflection checks are the cheapest: try them first.
+		slices.SortStableFunc(acts, func(x, y lineAction) int { return int(y.limitState) - int(x.limitState) })
+	}
+	for _, a := range acts {
 		w := math.Abs(a.wNmm)
 		if a.limitState == actions.SLS {
 			delta := coef.Deflection*w*L*L*L*L/(steelE*sec.IxMM4) + a.pointN*L*L*L/(48*steelE*sec.IxMM4)
 			ratio := delta / (L / p.deflectionRatio)
 			v.deflection = math.Max(v.deflection, ratio)
-			g := Governing{Check: fmt.Sprintf("deflection, span/%g", p.deflectionRatio), Standard: "AS/NZS 1170.0:2002",
+			g := Governing{Check: deflectionCheckName, Standard: "AS/NZS 1170.0:2002",
 				Clause: "cl. 4.3, Appendix C (limit from the grid)", LimitState: "SLS", Combination: a.name, Utilisation: ratio}
 			take(g)
 			if keep {
@@ -420,6 +446,18 @@ func (d *designer) checkLine(p lineProblem, arr arrangement, sec catalog.Section
 		if continuous {
 			act.MomentAtShear = hog
 		}
+		if !keep {
+			// Section capacity bounds every member capacity of the same
+			// flange (AS/NZS 4600:2018 cl. 3.3.2 ≥ cl. 3.3.3): a section
+			// failing it fails, with no need for the full check set.
+			u := math.Max(act.FastenedFlangeMoment/(coldformed.PhiBending*caps.MsTop),
+				act.FreeFlangeMoment/(coldformed.PhiBending*caps.MsBot))
+			if u > 1 {
+				v.governing = Governing{Check: "section moment capacity", Standard: coldformed.Standard, Clause: "cl. 3.3.2",
+					LimitState: "ULS", Combination: a.name, Utilisation: u}
+				return v
+			}
+		}
 		res, err := coldformed.CheckPurlin(caps, member, act)
 		if err != nil {
 			v.governing = Governing{Check: err.Error(), Utilisation: math.Inf(1)}
@@ -437,6 +475,10 @@ func (d *designer) checkLine(p lineProblem, arr arrangement, sec catalog.Section
 	}
 	return v
 }
+
+// deflectionCheckName names the line deflection check; its limit is the
+// grid's span/deflection ratio, printed beside it in the report.
+const deflectionCheckName = "deflection (limit span over the grid's ratio)"
 
 // cleatBearing: purlins and girts are bolted through the web to cleats, so
 // the reaction does not bear on a flange and web bearing (AS/NZS 4600:2018
