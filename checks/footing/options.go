@@ -33,6 +33,8 @@ type Options struct {
 	// SoilUnitWeightKNm3 is the backfill's unit weight. Default 18 kN/m³
 	// (common practice, no source).
 	SoilUnitWeightKNm3 float64
+
+	slidingName string // set by resolved
 	// SoilCoverM is the depth of soil over the top of the pad. Default 0
 	// (pad cast to ground level).
 	SoilCoverM float64
@@ -75,6 +77,7 @@ func DefaultOptions() Options {
 func (o *Options) resolved() (Options, error) {
 	d := DefaultOptions()
 	if o == nil {
+		d.slidingName = slidingName(d)
 		return d, nil
 	}
 	r := *o
@@ -110,7 +113,18 @@ func (o *Options) resolved() (Options, error) {
 	if len(errs) == 0 {
 		r.checkRanges(&errs)
 	}
+	r.slidingName = slidingName(r)
 	return r, errs.err("footing options")
+}
+
+// slidingName names the sliding check once per options, off the search's
+// hot path.
+func slidingName(o Options) string {
+	name := fmt.Sprintf("sliding (friction mu=%.3g, common practice)", o.FrictionCoefficient)
+	if o.IncludePassive {
+		name += " + passive"
+	}
+	return name
 }
 
 // checkRanges reports bounds that are individually valid but inconsistent.

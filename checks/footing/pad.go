@@ -4,6 +4,7 @@ import (
 	"cmp"
 	"fmt"
 	"slices"
+	"sort"
 )
 
 // Pad is a sized square pad footing for one column base.
@@ -41,11 +42,8 @@ func SizePad(b Base, opt *Options) (Pad, error) {
 	if err := b.Validate(); err != nil {
 		return Pad{}, err
 	}
-	cands := candidates(o)
-	for _, p := range cands {
-		if cs := p.checks(b); allPass(cs) {
-			return newPad(b.Name, OK, p, cs), nil
-		}
+	if p, ok := smallestPassing(b, o); ok {
+		return newPad(b.Name, OK, p, p.checks(b)), nil
 	}
 	largest := pad{b: o.maxWidth(), d: o.maxDepth(), o: &o}
 	res := newPad(b.Name, NoSolution, largest, largest.checks(b))
@@ -56,6 +54,28 @@ func SizePad(b Base, opt *Options) (Pad, error) {
 func newPad(name string, s Status, p pad, cs []Check) Pad {
 	return Pad{Base: name, Status: s, WidthM: p.b, DepthM: p.d, ConcreteVolumeM3: p.volume(),
 		Governing: governing(cs), Checks: cs, Notes: padNotes}
+}
+
+// smallestPassing returns the least-volume pad of the grid that passes
+// (ties: shallower, then narrower), the same pad a scan of candidates in
+// that order finds. Every check improves with width at a given depth (more
+// weight, more area, less eccentricity), so each depth's narrowest passing
+// width is found by bisection over the width steps.
+func smallestPassing(b Base, o Options) (pad, bool) {
+	widths := steps(o.MinWidthM, o.MaxWidthM, o.WidthStepM)
+	var best pad
+	found := false
+	for _, d := range steps(o.MinDepthM, o.MaxDepthM, o.DepthStepM) {
+		i := sort.Search(len(widths), func(i int) bool { return pad{b: widths[i], d: d, o: &o}.passes(b) })
+		if i == len(widths) {
+			continue
+		}
+		p := pad{b: widths[i], d: d, o: &o}
+		if !found || p.volume() < best.volume() {
+			best, found = p, true
+		}
+	}
+	return best, found
 }
 
 // candidates lists every width × depth pad of the grid, lightest first

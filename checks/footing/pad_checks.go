@@ -1,7 +1,6 @@
 package footing
 
 import (
-	"fmt"
 	"math"
 )
 
@@ -75,12 +74,10 @@ func (p pad) bearing(r Reaction) Check {
 func (p pad) sliding(r Reaction) Check {
 	n := max(r.VerticalKN+p.stabilising(), 0)
 	capacity := p.o.FrictionCoefficient * n
-	name := fmt.Sprintf("sliding (friction mu=%.3g, common practice)", p.o.FrictionCoefficient)
 	if p.o.IncludePassive {
 		capacity += p.passive()
-		name += " + passive"
 	}
-	return newCheck(std1170, cl1170, name, ULS, r.Combination, math.Abs(r.ShearKN), capacity, "kN")
+	return newCheck(std1170, cl1170, p.o.slidingName, ULS, r.Combination, math.Abs(r.ShearKN), capacity, "kN")
 }
 
 // passive is the reduced Rankine passive force on one face of the pad, kN:
@@ -118,6 +115,21 @@ func (p pad) checks(b Base) []Check {
 		out = append(out, worst(b.ULS, p.overturning))
 	}
 	return out
+}
+
+// passes reports whether the pad passes every check for base b, stopping
+// at the first failure: the search's fast path, before checks builds the
+// full list for the chosen pad.
+func (p pad) passes(b Base) bool {
+	ok := func(rs []Reaction, check func(Reaction) Check) bool {
+		for _, r := range rs {
+			if !check(r).Passes() {
+				return false
+			}
+		}
+		return true
+	}
+	return ok(b.ULS, p.uplift) && ok(b.SLS, p.bearing) && ok(b.ULS, p.sliding) && ok(b.ULS, p.overturning)
 }
 
 // worst applies check to every reaction and keeps the highest utilisation.
