@@ -108,8 +108,7 @@ func parseFlags(fs *pflag.FlagSet, args []string) error {
 	fs.SetOutput(io.Discard)
 	err := fs.Parse(args)
 	if errors.Is(err, pflag.ErrHelp) {
-		fs.Usage()
-		return err
+		return err // pflag has printed fs.Usage
 	}
 	if err != nil {
 		return &usageError{msg: err.Error() + " (see --help)"}
