@@ -35,4 +35,9 @@ type frameChoice struct {
 	// Left and Right are each base's reactions under every combination;
 	// the frame is symmetric but the wind is not.
 	Left, Right []BaseReaction
+	// RafterMomentKNm and ColumnMomentKNm are the largest ULS moment
+	// magnitudes in the rafter and the column, for the restraint forces
+	// the bracing takes (AS 4100:2020 cl. 6.6.2); 0 means not given, and
+	// the bracing then bounds them by the section's moment capacity.
+	RafterMomentKNm, ColumnMomentKNm float64
 }

@@ -82,8 +82,8 @@ type MemberGroup struct {
 type Footing struct {
 	WidthM       float64 // square pad side
 	DepthM       float64
-	Count        int     // pads in the building
-	ConcreteM3   float64 // all pads
+	Count        int     // pads of this type in the building
+	ConcreteM3   float64 // all pads of this type
 	BoltSize     string  // e.g. "M16 4.6/S"
 	BoltsPerBase int
 	Governing    Governing
@@ -109,7 +109,13 @@ type Result struct {
 	KneeBraceRafterM  float64
 	FlyBracesPerFrame int
 
-	Footing Footing
+	// Footing is the pad at the column bases outside the braced bays (at
+	// every base when all of them are in braced bays); BracedFooting is the
+	// pad at the braced bays' column bases, which also carry the wall
+	// bracing's uplift and shear (zero when every base is braced). The
+	// building's concrete is Footing.ConcreteM3 + BracedFooting.ConcreteM3.
+	Footing       Footing
+	BracedFooting Footing
 
 	SteelMassKg      float64 // every member group
 	MassPerFloorKgM2 float64 // steel mass over span × length
