@@ -1,0 +1,195 @@
+package main
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"io"
+	"iter"
+	"os"
+	"path/filepath"
+	"time"
+
+	"github.com/spansweep/spansweep/grids"
+	"github.com/spansweep/spansweep/optimize"
+	"github.com/spansweep/spansweep/outputs/dataset"
+)
+
+// designCase designs one case; tests may wrap it (to design each case once
+// however often a grid is swept).
+var designCase = optimize.Design
+
+// sweepCaseHook, when set (by tests only), is called after each dataset
+// row is written with the run's context and the rows written so far.
+var sweepCaseHook func(ctx context.Context, rows int)
+
+// sweep designs the shard's cases into its dataset part, then writes the
+// summary and, for a whole-grid run, the tables and plots.
+func (s *sweepRun) sweep(ctx context.Context, stdout, stderr io.Writer) error {
+	w, err := s.openPart(stderr)
+	if err != nil {
+		return err
+	}
+	var stats runStats
+	ran := false
+	err = s.withProfiles(func() error {
+		ran = true
+		var err error
+		stats, err = s.design(ctx, w, stderr)
+		return err
+	})
+	if !ran {
+		w.Abort() // the CPU profile could not start: keep any resumed rows as a partial part
+	}
+	if err != nil {
+		return err
+	}
+	return s.finish(stats, stdout, stderr)
+}
+
+// openPart starts the shard's dataset part, or with --resume continues the
+// one an earlier run left. --resume with nothing to resume starts afresh, so
+// a batch scheduler can give every attempt the same command.
+func (s *sweepRun) openPart(stderr io.Writer) (*dataset.Writer, error) {
+	dir := s.layout.datasetDir()
+	if s.flags.resume {
+		w, err := dataset.Resume(dir, s.meta())
+		var mm *dataset.MismatchError
+		var ve *dataset.VersionError
+		switch {
+		case err == nil:
+			return w, nil
+		case errors.As(err, &mm), errors.As(err, &ve):
+			return nil, usagef("--resume: %v", err)
+		case !errors.Is(err, dataset.ErrNothingToResume):
+			return nil, fmt.Errorf("resume: %w", err)
+		}
+		if !s.flags.quiet {
+			fmt.Fprintf(stderr, "spansweep sweep: --resume: no earlier run of shard %s in %s; starting afresh\n", s.shard, dir)
+		}
+	}
+	w, err := dataset.Create(dir, s.meta())
+	if err != nil {
+		return nil, fmt.Errorf("dataset: %w", err)
+	}
+	return w, nil
+}
+
+// runStats is what the design loop measured.
+type runStats struct {
+	resumed  int // rows carried over from an earlier run
+	designed int // cases designed by this run
+	wall     time.Duration
+}
+
+// design runs the engine over the shard's cases not yet in w and closes the
+// part. On a signal it keeps the finished cases as a partial part and
+// returns an error that says how to resume.
+func (s *sweepRun) design(ctx context.Context, w *dataset.Writer, stderr io.Writer) (runStats, error) {
+	lo, hi := s.shard.Range(s.grid.Count())
+	total := hi - lo
+	stats := runStats{resumed: w.Rows()}
+	settings := &optimize.Settings{Catalogue: s.cat}
+	eng := optimize.Engine{
+		Workers: s.flags.workers,
+		Design:  func(c grids.Case) optimize.Result { return designCase(c, settings) },
+	}
+	var prog *progress
+	if !s.flags.quiet && isTerminal(stderr) {
+		prog = newProgress(stderr, total, w.Rows(), time.Now)
+	}
+	todo, err := remaining(s.grid.ShardCases(s.shard), w.Rows(), w.Done)
+	if err != nil {
+		w.Abort()
+		return stats, err
+	}
+	start := time.Now()
+	err = eng.Run(ctx, todo, func(r optimize.Result) error {
+		if err := w.WriteResult(r); err != nil {
+			return err
+		}
+		prog.update(w.Rows())
+		if sweepCaseHook != nil {
+			sweepCaseHook(ctx, w.Rows())
+		}
+		return nil
+	})
+	prog.finish()
+	stats.wall = time.Since(start)
+	stats.designed = w.Rows() - stats.resumed
+	if err != nil && !(ctx.Err() != nil && w.Rows() == total) {
+		return stats, s.stopped(ctx, w, total, err)
+	}
+	if err := w.Close(); err != nil {
+		return stats, fmt.Errorf("dataset: %w", err)
+	}
+	return stats, nil
+}
+
+// stopped finalizes an interrupted or failed run's part as a partial one.
+func (s *sweepRun) stopped(ctx context.Context, w *dataset.Writer, total int, cause error) error {
+	rows := w.Rows()
+	if err := w.Abort(); err != nil {
+		return fmt.Errorf("%w; and keeping the %d finished cases failed: %v", cause, rows, err)
+	}
+	if ctx.Err() == nil || !errors.Is(cause, ctx.Err()) {
+		return fmt.Errorf("stopped after %d of %d cases: %w", rows, total, cause)
+	}
+	if rows == 0 {
+		return fmt.Errorf("interrupted before any case finished; nothing was kept")
+	}
+	partial := filepath.Join(s.layout.datasetDir(), partialFileName(s.shard))
+	return fmt.Errorf("interrupted: %d of %d cases of shard %s finished and are kept in %s; run the same command with --resume to continue",
+		rows, total, s.shard, partial)
+}
+
+// remaining skips the first done cases, which a resumed part holds (an
+// interrupted run keeps an unbroken prefix of its shard, in case order), and
+// yields the rest. It checks the prefix against isDone before the run, so
+// the writer is not read while the engine writes to it.
+func remaining(cases iter.Seq[grids.Case], done int, isDone func(caseID string) bool) (iter.Seq[grids.Case], error) {
+	i := 0
+	for c := range cases {
+		if i == done {
+			if isDone(c.ID) {
+				return nil, fmt.Errorf("resume: case %s (index %d) is in the dataset part but after its first %d cases; the part is not a prefix of the shard", c.ID, c.Index, done)
+			}
+			break
+		}
+		if !isDone(c.ID) {
+			return nil, fmt.Errorf("resume: case %s (index %d) is missing from the first %d cases of the dataset part; the part is not a prefix of the shard", c.ID, c.Index, done)
+		}
+		i++
+	}
+	return func(yield func(grids.Case) bool) {
+		i := 0
+		for c := range cases {
+			if i++; i > done && !yield(c) {
+				return
+			}
+		}
+	}, nil
+}
+
+// withProfiles runs fn under the CPU profile and writes the heap profile
+// after it, as the flags ask.
+func (s *sweepRun) withProfiles(fn func() error) error {
+	stop, err := startCPUProfile(s.flags.cpuProfile)
+	if err != nil {
+		return err
+	}
+	runErr := fn()
+	if err := stop(); err != nil && runErr == nil {
+		runErr = err
+	}
+	if err := writeHeapProfile(s.flags.memProfile); err != nil && runErr == nil {
+		runErr = err
+	}
+	return runErr
+}
+
+// isTerminal reports whether w is a terminal, where progress is drawn.
+func isTerminal(w io.Writer) bool {
+	f, ok := w.(*os.File)
+	return ok && termIsTerminal(int(f.Fd()))
+}

@@ -1,0 +1,141 @@
+package main
+
+import (
+	"bytes"
+	"context"
+	"os"
+	"path/filepath"
+	"strings"
+	"sync"
+	"syscall"
+	"testing"
+
+	"github.com/spansweep/spansweep/grids"
+)
+
+// interruptAfter makes the next sweep receive a real SIGINT once rows rows
+// are written, as Ctrl-C would; the hook waits until the sweep has seen it.
+func interruptAfter(t *testing.T, rows int) {
+	t.Helper()
+	var once sync.Once
+	sweepCaseHook = func(ctx context.Context, n int) {
+		if n < rows {
+			return
+		}
+		once.Do(func() {
+			if err := syscall.Kill(os.Getpid(), syscall.SIGINT); err != nil {
+				t.Errorf("send SIGINT: %v", err)
+				return
+			}
+			<-ctx.Done()
+		})
+	}
+	t.Cleanup(func() { sweepCaseHook = nil })
+}
+
+// An interrupted run keeps its finished cases, says how to resume and exits
+// 1; the same command with --resume then gives the rows and tables of an
+// uninterrupted run.
+func TestSweepInterruptThenResume(t *testing.T) {
+	f := newSweepFixture(t)
+	f.mustSweep("straight", "--workers", "2")
+
+	interruptAfter(t, 5)
+	r := f.sweep("out", "--workers", "2")
+	sweepCaseHook = nil
+	if r.code != exitFail || !strings.Contains(r.errs, "--resume") || !strings.Contains(r.errs, "interrupted") {
+		t.Fatalf("interrupted run: got exit %d, want 1 with a message naming --resume:\n%s", r.code, r.errs)
+	}
+	shard := grids.Shard{K: 1, N: 1}
+	data := filepath.Join(f.dir, "out", "dataset")
+	if _, err := os.Stat(filepath.Join(data, partialFileName(shard))); err != nil {
+		t.Fatalf("no partial part after the interrupt: %v", err)
+	}
+	for _, p := range []string{filepath.Join(data, partFileName(shard)), filepath.Join(f.dir, "out", "tables")} {
+		if _, err := os.Stat(p); err == nil {
+			t.Errorf("%s exists after an interrupt; want only the partial part", p)
+		}
+	}
+
+	// Without --resume the interrupted run is kept, not overwritten.
+	if r := f.sweep("out"); r.code != exitUsage || !strings.Contains(r.errs, "--resume") {
+		t.Errorf("rerun without --resume: got exit %d, want 2 suggesting --resume:\n%s", r.code, r.errs)
+	}
+
+	r = f.mustSweep("out", "--resume", "--workers", "1")
+	sameRows(t, "resumed against uninterrupted", f.rows("out"), f.rows("straight"))
+	sameFiles(t, "resumed against uninterrupted", f.derivedFiles("out"), f.derivedFiles("straight"))
+	s := f.summary("out/summary.json")
+	// The hook fires at 5 rows; the engine then finishes up to 2×workers in flight.
+	if s.ResumedCases < 5 || s.ResumedCases >= sweepGridCases || s.ResumedCases+s.DesignedCases != sweepGridCases {
+		t.Errorf("resumed summary: got %d resumed + %d designed, want 5 to %d resumed, %d in all",
+			s.ResumedCases, s.DesignedCases, sweepGridCases-1, sweepGridCases)
+	}
+	if _, err := os.Stat(filepath.Join(data, partialFileName(shard))); err == nil {
+		t.Errorf("the partial part is still there after the resumed run finished")
+	}
+}
+
+// A finished run is never overwritten: without --resume the sweep refuses;
+// with --resume it keeps the rows and rebuilds the tables; a dataset of
+// another sharding or another grid is refused, and its files left as they
+// were.
+func TestSweepExistingOutput(t *testing.T) {
+	f := newSweepFixture(t)
+	f.mustSweep("out")
+	part := filepath.Join(f.dir, "out", "dataset", partFileName(grids.Shard{K: 1, N: 1}))
+	before, err := os.ReadFile(part)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rows := f.rows("out")
+
+	other := writeGrid(t, strings.Replace(sweepGridText, `"N2", "C1"`, `"N3"`, 1))
+	tests := []struct {
+		name  string
+		args  []string
+		wants []string
+	}{
+		{"again", nil, []string{"a finished run", "--resume", "nothing was overwritten"}},
+		{"other sharding", []string{"--shard", "1/2"}, []string{"sharded 1 ways", "shard 1/2"}},
+		{"other sharding resumed", []string{"--shard", "2/2", "--resume"}, []string{"sharded 1 ways"}},
+		{"other grid resumed", []string{"--resume", "--grid", other}, []string{"grid_sha256"}},
+		{"other grid tables", []string{"--tables-only", "--grid", other}, []string{"grid_sha256"}},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			r := f.sweep("out", tt.args...)
+			if r.code != exitUsage {
+				t.Fatalf("got exit %d, want 2; stderr:\n%s", r.code, r.errs)
+			}
+			for _, w := range tt.wants {
+				if !strings.Contains(r.errs, w) {
+					t.Errorf("stderr lacks %q:\n%s", w, r.errs)
+				}
+			}
+			if after, _ := os.ReadFile(part); !bytes.Equal(after, before) {
+				t.Errorf("the finished part changed")
+			}
+			if entries, _ := os.ReadDir(filepath.Dir(part)); len(entries) != 1 {
+				t.Errorf("got %d files in the dataset directory, want the one part", len(entries))
+			}
+		})
+	}
+	if err := os.Remove(filepath.Join(f.dir, "out", "tables", "span-tables.csv")); err != nil {
+		t.Fatal(err)
+	}
+	f.mustSweep("out", "--resume")
+	sameRows(t, "--resume on a finished run", f.rows("out"), rows)
+	if _, err := os.Stat(filepath.Join(f.dir, "out", "tables", "span-tables.csv")); err != nil {
+		t.Errorf("--resume on a finished run did not rebuild the tables: %v", err)
+	}
+	// --tables-only redoes the tables of a finished run, here enveloped.
+	before, _ = os.ReadFile(part)
+	f.mustSweep("out", "--tables-only", "--envelope")
+	if s := f.summary("out/summary.json"); !s.Envelope || s.Cases != sweepGridCases || s.DesignedCases != 0 {
+		t.Errorf("--tables-only --envelope: got envelope %v, %d cases, %d designed; want true, %d, 0", s.Envelope, s.Cases, s.DesignedCases, sweepGridCases)
+	}
+	if after, _ := os.ReadFile(part); !bytes.Equal(after, before) {
+		t.Errorf("--tables-only changed the dataset part")
+	}
+}
