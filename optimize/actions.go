@@ -90,3 +90,16 @@ func siteSpeeds(w grids.Wind, referenceHeightM float64) (wind.Speeds, error) {
 		DesignLifeYears: w.DesignLifeYears, Ms: w.Ms, Mt: w.Mt, Md: w.Md}
 	return s.Speeds(referenceHeightM)
 }
+
+// DesignPressures returns the ultimate and serviceability design dynamic
+// pressures (kPa) of a wind condition at a building's reference height,
+// the same derivation Design uses; the estimator's lookup orders wind
+// conditions by them.
+func DesignPressures(w grids.Wind, spanM, eavesHeightM, roofPitchDeg float64) (qULSKPa, qSLSKPa float64, err error) {
+	b := wind.Building{SpanM: spanM, EaveHeightM: eavesHeightM, PitchDeg: roofPitchDeg}
+	s, err := siteSpeeds(w, b.ReferenceHeightM())
+	if err != nil {
+		return 0, 0, err
+	}
+	return s.QULSKPa, s.QSLSKPa, nil
+}

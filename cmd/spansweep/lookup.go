@@ -8,7 +8,8 @@ import (
 
 	"github.com/spf13/pflag"
 
-	"github.com/spansweep/spansweep/checks/wind"
+	"github.com/spansweep/spansweep/grids"
+	"github.com/spansweep/spansweep/optimize"
 	"github.com/spansweep/spansweep/outputs/bill"
 	"github.com/spansweep/spansweep/outputs/dataset"
 )
@@ -132,23 +133,13 @@ func runLookup(args []string, stdout, stderr io.Writer) error {
 }
 
 // siteWind gives the asked site's design pressures at a solved building,
-// from the same wind package the optimiser uses: the reference height is the
-// building's average roof height (AS/NZS 1170.2:2021, see wind.Building).
+// by the same derivation the optimiser uses (optimize.DesignPressures).
 func siteWind(w bill.WindRequest, at *dataset.Row) (bill.Pressures, error) {
-	h := wind.Building{SpanM: at.SpanM, EaveHeightM: at.EavesHeightM, PitchDeg: at.RoofPitchDeg}.ReferenceHeightM()
-	var sp wind.Speeds
-	var err error
-	if w.Class != "" {
-		var c wind.HousingClass
-		if c, err = wind.ParseHousingClass(w.Class); err == nil {
-			sp, err = c.Speeds(h)
-		}
-	} else {
-		sp, err = wind.Site{Region: w.Region, TerrainCategory: w.TerrainCategory, ImportanceLevel: w.ImportanceLevel,
-			DesignLifeYears: w.DesignLifeYears}.Speeds(h)
-	}
+	gw := grids.Wind{HousingClass: w.Class, Region: w.Region, TerrainCategory: w.TerrainCategory,
+		ImportanceLevel: w.ImportanceLevel, DesignLifeYears: w.DesignLifeYears}
+	qu, qs, err := optimize.DesignPressures(gw, at.SpanM, at.EavesHeightM, at.RoofPitchDeg)
 	if err != nil {
 		return bill.Pressures{}, err
 	}
-	return bill.Pressures{QULSKPa: sp.QULSKPa, QSLSKPa: sp.QSLSKPa}, nil
+	return bill.Pressures{QULSKPa: qu, QSLSKPa: qs}, nil
 }
