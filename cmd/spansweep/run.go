@@ -17,6 +17,10 @@ const (
 	exitUsage = 2
 )
 
+// programVersion is stamped on every dataset part, table and summary; a
+// resumed run must be made by the same version.
+const programVersion = "0.1.0-dev"
+
 // caution is printed on every human-readable output.
 const caution = "CAUTION: spansweep is a design aid. Verify every design for its site with a qualified structural engineer; local codes and licensed practice govern."
 
@@ -42,6 +46,10 @@ func usagef(format string, args ...any) error {
 
 // run dispatches to a sub-command and maps its error to an exit status.
 func run(args []string, stdout, stderr io.Writer) int {
+	if len(args) == 1 && (args[0] == "--version" || args[0] == "version") {
+		fmt.Fprintln(stdout, "spansweep", programVersion)
+		return exitOK
+	}
 	if len(args) == 0 || args[0] == "-h" || args[0] == "--help" || args[0] == "help" {
 		printUsage(stdout)
 		if len(args) == 0 {
@@ -84,7 +92,7 @@ func printUsage(w io.Writer) {
 	for _, n := range commandNames() {
 		fmt.Fprintf(w, "  %-9s %s\n", n, commands[n].summary)
 	}
-	fmt.Fprintln(w, "\nRun 'spansweep <command> --help' for a command's flags.")
+	fmt.Fprintln(w, "\nRun 'spansweep <command> --help' for a command's flags; 'spansweep --version' for the version.")
 	fmt.Fprintln(w, "\n"+caution)
 }
 

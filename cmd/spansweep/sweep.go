@@ -19,9 +19,6 @@ func init() {
 	commands["sweep"] = command{summary: "solve every case of a grid file; write the dataset, span tables and plots", run: runSweep}
 }
 
-// programVersion is stamped on every dataset part, table and summary; a
-// resumed run must be made by the same version.
-const programVersion = "0.1.0-dev"
 
 const sweepSynopsis = `Designs every case of a grid file (default: the embedded Ridgeline Sheds
 range) with a section catalogue (default: the embedded RS series) and writes,
