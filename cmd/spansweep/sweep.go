@@ -19,7 +19,6 @@ func init() {
 	commands["sweep"] = command{summary: "solve every case of a grid file; write the dataset, span tables and plots", run: runSweep}
 }
 
-
 const sweepSynopsis = `Designs every case of a grid file (default: the embedded Ridgeline Sheds
 range) with a section catalogue (default: the embedded RS series) and writes,
 under --out (default ./out):
