@@ -1,0 +1,85 @@
+package optimize
+
+// Fly braces restrain the inner flange of a rafter or column at a purlin
+// (girt) line, shortening the segment the inner flange buckles over where
+// it is in compression (hogging at the knee under gravity, sagging under
+// uplift). They go at purlin and girt points only, the same on both sides
+// of the symmetric frame.
+
+// greedyFlyBraces returns the fewest fly braces (canonical positions) that
+// make every inner-flange segment of the member pass under every ULS
+// combination on both sides: from the base or knee, each segment is
+// extended to the farthest line at which it still passes. Greedy reach is
+// optimal for covering a line when a segment inside a passing one passes
+// too (a shorter segment never has a lower capacity; the moment-gradient
+// factor can make this not strictly so, which is accepted). ok is false
+// when even a brace at every line leaves a failing segment.
+func (m *frameModel) greedyFlyBraces(s *memberSpec, l *lambdas) (fly []float64, ok bool, err error) {
+	pos := 0.0
+	for {
+		pass, err := m.innerPasses(s, l, pos, s.length)
+		if err != nil || pass {
+			return fly, pass, err
+		}
+		reach := -1.0
+		for _, q := range s.fly {
+			if q <= pos {
+				continue
+			}
+			pass, err := m.innerPasses(s, l, pos, q)
+			if err != nil {
+				return fly, false, err
+			}
+			if !pass {
+				break
+			}
+			reach = q
+		}
+		if reach < 0 {
+			return fly, false, nil
+		}
+		fly = append(fly, reach)
+		pos = reach
+	}
+}
+
+// innerPasses reports whether the inner-flange segment [a, b] (canonical)
+// passes under every ULS combination on both sides. A failure under a λc
+// that is only a bound is confirmed with the exact λc.
+func (m *frameModel) innerPasses(s *memberSpec, l *lambdas, a, b float64) (bool, error) {
+	for _, c := range m.order {
+		for _, k := range s.kind.parts() {
+			pa, pb := s.toPart(k, a, b)
+			f := m.combine(k, c)
+			sg := m.segmentOf(k, f, pa, pb)
+			if sg.hog <= 0 {
+				continue
+			}
+			for {
+				in := m.inputs(s, k, c, l.value[c])
+				u, ok := 0.0, false
+				if m.fast {
+					u, ok = s.fastUtilisation(in, sg.hog, pb-pa, sg.cbPos, false)
+				}
+				if !ok {
+					res, err := s.check(in, sg.hog, pb-pa, sg.cbPos, false)
+					if err != nil {
+						return false, err
+					}
+					u = res.Utilisation()
+				}
+				if u <= 1 {
+					break
+				}
+				if l.exact[c] {
+					m.failedFirst(c)
+					return false, nil
+				}
+				if err := m.exactLambda(l, c); err != nil {
+					return false, err
+				}
+			}
+		}
+	}
+	return true, nil
+}
