@@ -126,7 +126,11 @@ func (m *frameModel) candidates() []frameCandidate {
 			}
 		}
 	}
-	slices.SortStableFunc(out, func(a, b frameCandidate) int { return cmp.Compare(a.massLB, b.massLB) })
+	// Ties keep enumeration order (pair, then unbraced first), so the
+	// order is deterministic without a stable sort.
+	slices.SortFunc(out, func(a, b frameCandidate) int {
+		return cmp.Or(cmp.Compare(a.massLB, b.massLB), cmp.Compare(a.pair, b.pair), cmpBool(a.braced, b.braced))
+	})
 	return out
 }
 
@@ -245,4 +249,15 @@ func (r searchResult) reason(m *frameModel) string {
 	}
 	return fmt.Sprintf("no section pair passes: best %s at utilisation %.2f, failing %s (%s %s) under %s",
 		pair, r.o.util, gov.Check, gov.Standard, gov.Clause, gov.Combination)
+}
+
+// cmpBool orders false before true.
+func cmpBool(a, b bool) int {
+	switch {
+	case a == b:
+		return 0
+	case a:
+		return 1
+	}
+	return -1
 }

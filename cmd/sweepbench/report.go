@@ -1,0 +1,106 @@
+package main
+
+import (
+	"encoding/json"
+	"fmt"
+	"io"
+)
+
+// report is everything one sweepbench run measured.
+type report struct {
+	DateUTC   string `json:"date_utc"`
+	GoVersion string `json:"go_version"`
+	CPUs      int    `json:"cpus"`
+
+	Grid       string            `json:"grid,omitempty"`
+	Cases      int               `json:"cases,omitempty"` // cases timed
+	GridCases  int               `json:"grid_cases,omitempty"`
+	Design     designState       `json:"design"`
+	Throughput []workerRun       `json:"throughput,omitempty"`
+	Speedup    float64           `json:"speedup,omitempty"` // cases/s of the last worker count over the first
+	PerCase    caseTimes         `json:"per_case_one_worker"`
+	Search     *searchComparison `json:"search,omitempty"`
+	PeakRSSMB  float64           `json:"peak_rss_mb,omitempty"`
+	Large      []largeRun        `json:"large,omitempty"`
+	// LargeCatalogue names the catalogue of the --large runs.
+	LargeCatalogue string `json:"large_catalogue,omitempty"`
+}
+
+// speedup sets Speedup from the first and last throughput runs.
+func (r *report) speedup() {
+	if n := len(r.Throughput); n >= 2 && r.Throughput[0].CasesPerS > 0 {
+		r.Speedup = r.Throughput[n-1].CasesPerS / r.Throughput[0].CasesPerS
+	}
+}
+
+func (r *report) writeJSON(w io.Writer) error {
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(r)
+}
+
+// writeText prints one figure per line: name, value, unit.
+func (r *report) writeText(w io.Writer) {
+	line := func(name string, format string, args ...any) {
+		fmt.Fprintf(w, "%-44s "+format+"\n", append([]any{name}, args...)...)
+	}
+	line("date", "%s", r.DateUTC)
+	line("go, cpus", "%s, %d", r.GoVersion, r.CPUs)
+	if r.Grid != "" {
+		line("grid", "%s", r.Grid)
+		line("cases timed", "%d of the grid's %d (evenly spaced)", r.Cases, r.GridCases)
+		line("design: ok cases", "%d", r.Design.OK)
+		line("design: no_solution cases", "%d", r.Design.NoSolution)
+		for _, k := range r.Design.failedAtKeys() {
+			line("design: no_solution first failing at "+k, "%d", r.Design.FailedAt[k])
+		}
+	}
+	for _, t := range r.Throughput {
+		line(fmt.Sprintf("cases/s, %d workers", t.Workers), "%.1f cases/s (%d cases in %.2f s)", t.CasesPerS, t.Cases, t.WallS)
+	}
+	if len(r.Throughput) >= 2 {
+		line(fmt.Sprintf("speedup, %d to %d workers", r.Throughput[0].Workers, r.Throughput[len(r.Throughput)-1].Workers), "%.2f", r.Speedup)
+	}
+	if len(r.Throughput) > 0 {
+		line("time per case, median (1st worker count)", "%.3f ms", r.PerCase.MedianMS)
+		line("time per case, 95th percentile", "%.3f ms", r.PerCase.P95MS)
+		line("time per case, maximum", "%.3f ms", r.PerCase.MaxMS)
+	}
+	if s := r.Search; s != nil {
+		s.writeText(line)
+	}
+	if r.PeakRSSMB > 0 {
+		line("peak resident memory (VmHWM)", "%.1f MB", r.PeakRSSMB)
+	}
+	if r.LargeCatalogue != "" {
+		line("large: catalogue", "%s", r.LargeCatalogue)
+	}
+	for _, l := range r.Large {
+		line("large: grid", "%s", l.Grid)
+		line("large: cases", "%d", l.Cases)
+		line("large: wall time", "%.1f s (%d workers)", l.WallS, l.Workers)
+		line("large: cases/s", "%.1f cases/s", l.CasesPerS)
+		line("large: peak resident memory (ru_maxrss)", "%.1f MB", l.PeakRSSMB)
+		line("large: dataset rows", "%d", l.Rows)
+		line("large: dataset size", "%.1f MB", l.DatasetMB)
+	}
+	fmt.Fprintln(w, caution)
+}
+
+func (s *searchComparison) writeText(line func(string, string, ...any)) {
+	line("search sample", "%d cases, evenly spaced", s.SampleCases)
+	line("analyses per case, search", "%.2f", s.SearchAnalysesPerCase)
+	line("analyses per case, exhaustive", "%.2f", s.ExhaustiveAnalysesPerCase)
+	if s.ExhaustiveAnalysesPerCase > 0 {
+		line("analyses, search over exhaustive", "%.4f", s.AnalysesRatio)
+	} else {
+		line("analyses, search over exhaustive", "n/a (exhaustive ran no frame analyses)")
+	}
+	line("time per case, search", "%.3f ms", s.SearchMSPerCase)
+	line("time per case, exhaustive", "%.3f ms", s.ExhaustiveMSCase)
+	line("search and exhaustive: identical masses", "%t", s.IdenticalMasses)
+	line("search and exhaustive: identical sections", "%t", s.IdenticalSections)
+	for _, m := range s.Mismatches {
+		line("  mismatch", "%s", m)
+	}
+}
