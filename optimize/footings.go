@@ -170,8 +170,10 @@ func (d *designer) setFootings(designs [2]footing.Footing) {
 	plain, braced := d.footingCounts()
 	if plain > 0 {
 		d.r.Footing, d.r.BracedFooting = footingOf(designs[0], plain), footingOf(designs[1], braced)
+		d.r.Footing.Bases, d.r.BracedFooting.Bases = "frame bases", "braced-bay bases"
 	} else {
 		d.r.Footing = footingOf(designs[1], braced) // every base is in a braced bay
+		d.r.Footing.Bases = "braced-bay bases"
 	}
 	if d.r.Calculation == nil {
 		return

@@ -80,6 +80,7 @@ type MemberGroup struct {
 
 // Footing is the pad chosen for each column base, and its holding-down bolts.
 type Footing struct {
+	Bases        string  // which column bases: "frame bases" or "braced-bay bases"
 	WidthM       float64 // square pad side
 	DepthM       float64
 	Count        int     // pads of this type in the building
@@ -125,6 +126,21 @@ type Result struct {
 	// Calculation is the full working, kept only with Settings.Record.
 	Calculation *Calculation
 }
+
+// Footings returns the footing types the building has (frame bases, then
+// braced-bay bases), skipping a type with no pads.
+func (r *Result) Footings() []Footing {
+	var out []Footing
+	for _, f := range []Footing{r.Footing, r.BracedFooting} {
+		if f.Count > 0 {
+			out = append(out, f)
+		}
+	}
+	return out
+}
+
+// ConcreteM3 is the concrete of every footing in the building.
+func (r *Result) ConcreteM3() float64 { return r.Footing.ConcreteM3 + r.BracedFooting.ConcreteM3 }
 
 // Member returns the group with the given role, or a zero group.
 func (r *Result) Member(role Role) MemberGroup {

@@ -398,11 +398,13 @@ func printSchedule(w io.Writer, res *optimize.Result) error {
 	} else {
 		p.printf("Knee braces: none\n")
 	}
-	if ft := res.Footing; ft.Count > 0 {
+	fts := res.Footings()
+	for _, ft := range fts {
 		g := ft.Governing
-		p.printf("Footings: %d pads %.2f m square × %.2f m deep (%.2f m³), %d × %s bolts per base; governing %s, %s %s, %s, utilisation %.3f\n",
-			ft.Count, ft.WidthM, ft.DepthM, ft.ConcreteM3, ft.BoltsPerBase, ft.BoltSize, g.Check, g.Standard, g.Clause, g.LimitState, g.Utilisation)
-	} else {
+		p.printf("Footings: %s, %d pads %.2f m square × %.2f m deep (%.2f m³), %d × %s bolts per base; governing %s, %s %s, %s, utilisation %.3f\n",
+			ft.Bases, ft.Count, ft.WidthM, ft.DepthM, ft.ConcreteM3, ft.BoltsPerBase, ft.BoltSize, g.Check, g.Standard, g.Clause, g.LimitState, g.Utilisation)
+	}
+	if len(fts) == 0 {
 		p.printf("Footings: none designed\n")
 	}
 	if res.Status == optimize.OK {

@@ -323,7 +323,7 @@ func TestPrintSchedule(t *testing.T) {
 			{Role: optimize.RoleRafter, Designation: "C250x75x2.4", Count: 10, LengthEachM: 6.093, MassKg: 488.2, Governing: gov},
 		},
 		Frames: 5, FlyBracesPerFrame: 4, KneeBraceColumnM: 0.8, KneeBraceRafterM: 1.2,
-		Footing:     optimize.Footing{WidthM: 0.6, DepthM: 0.75, Count: 10, ConcreteM3: 2.7, BoltSize: "M16 4.6/S", BoltsPerBase: 2, Governing: gov},
+		Footing:     optimize.Footing{Bases: "frame bases", WidthM: 0.6, DepthM: 0.75, Count: 10, ConcreteM3: 2.7, BoltSize: "M16 4.6/S", BoltsPerBase: 2, Governing: gov},
 		SteelMassKg: 1670.9, MassPerFloorKgM2: 1670.9 / 288,
 	}
 	var out bytes.Buffer
@@ -337,7 +337,7 @@ func TestPrintSchedule(t *testing.T) {
 		"rafter", "C250x75x2.4",
 		"Fly braces: 4 per frame, 20 in the building (5 frames)",
 		"Knee braces: 0.800 m down the column to 1.200 m along the rafter",
-		"Footings: 10 pads 0.60 m square × 0.75 m deep (2.70 m³), 2 × M16 4.6/S bolts per base",
+		"Footings: frame bases, 10 pads 0.60 m square × 0.75 m deep (2.70 m³), 2 × M16 4.6/S bolts per base",
 		"Total steel mass: 1670.9 kg, 5.80 kg/m² of floor", // 1670.9 / (12 × 24) = 5.802
 	} {
 		if !strings.Contains(text, w) {

@@ -165,7 +165,7 @@ func fixtureResult(t *testing.T) *optimize.Result {
 	}
 	return &optimize.Result{Case: c, Status: optimize.OK, VUltimateMS: 39.15, VServiceMS: 32.19, QUltimateKPa: 0.9196, QServiceKPa: 0.6217,
 		Members: members, Frames: 5, KneeBraceColumnM: 0.8, KneeBraceRafterM: 1.2, FlyBracesPerFrame: 4,
-		Footing: optimize.Footing{WidthM: 0.6, DepthM: 0.75, Count: 10, ConcreteM3: 2.7, BoltSize: "M16 4.6/S", BoltsPerBase: 2,
+		Footing: optimize.Footing{Bases: "frame bases", WidthM: 0.6, DepthM: 0.75, Count: 10, ConcreteM3: 2.7, BoltSize: "M16 4.6/S", BoltsPerBase: 2,
 			Governing: optimize.Governing{Check: "uplift", Standard: "AS/NZS 1170.0:2002", Clause: "cl. 4.2.1(b)", LimitState: "ULS", Combination: fxUplft, Utilisation: 0.83}},
 		SteelMassKg: mass, MassPerFloorKgM2: mass / (12 * 24), Cost: 8123.4, Analyses: 64, Calculation: calc}
 }

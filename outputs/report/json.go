@@ -24,6 +24,7 @@ type (
 		KneeBraceRafterM  float64          `json:"knee_brace_rafter_m"`
 		FlyBracesPerFrame int              `json:"fly_braces_per_frame"`
 		Footing           FootingJSON      `json:"footing"`
+		BracedFooting     FootingJSON      `json:"braced_footing"`
 		SteelMassKg       float64          `json:"steel_mass_kg"`
 		MassPerFloorKgM2  float64          `json:"mass_per_floor_kg_m2"`
 		CostCurrency      float64          `json:"cost_currency"`
@@ -74,6 +75,7 @@ type (
 
 	// FootingJSON is the pad footing at each column base.
 	FootingJSON struct {
+		Bases        string        `json:"bases"`
 		WidthM       float64       `json:"width_m"`
 		DepthM       float64       `json:"depth_m"`
 		Count        int           `json:"count"`
@@ -98,10 +100,9 @@ func NewJSON(r *optimize.Result) ResultJSON {
 		Members:          make([]MemberJSON, 0, len(r.Members)),
 		Frames:           r.Frames,
 		KneeBraceColumnM: r.KneeBraceColumnM, KneeBraceRafterM: r.KneeBraceRafterM, FlyBracesPerFrame: r.FlyBracesPerFrame,
-		Footing: FootingJSON{WidthM: r.Footing.WidthM, DepthM: r.Footing.DepthM, Count: r.Footing.Count,
-			ConcreteM3: r.Footing.ConcreteM3, BoltSize: r.Footing.BoltSize, BoltsPerBase: r.Footing.BoltsPerBase,
-			Governing: governingJSON(r.Footing.Governing)},
-		SteelMassKg: r.SteelMassKg, MassPerFloorKgM2: r.MassPerFloorKgM2, CostCurrency: r.Cost, FrameAnalyses: r.Analyses,
+		Footing:       footingJSON(r.Footing),
+		BracedFooting: footingJSON(r.BracedFooting),
+		SteelMassKg:   r.SteelMassKg, MassPerFloorKgM2: r.MassPerFloorKgM2, CostCurrency: r.Cost, FrameAnalyses: r.Analyses,
 	}
 	for _, m := range r.Members {
 		out.Members = append(out.Members, MemberJSON{Role: string(m.Role), Designation: m.Designation, SpacingM: m.SpacingM,
@@ -118,4 +119,10 @@ func NewJSON(r *optimize.Result) ResultJSON {
 func governingJSON(g optimize.Governing) GoverningJSON {
 	return GoverningJSON{Check: g.Check, Standard: g.Standard, Clause: g.Clause, LimitState: g.LimitState,
 		Combination: g.Combination, Utilisation: g.Utilisation}
+}
+
+func footingJSON(f optimize.Footing) FootingJSON {
+	return FootingJSON{Bases: f.Bases, WidthM: f.WidthM, DepthM: f.DepthM, Count: f.Count,
+		ConcreteM3: f.ConcreteM3, BoltSize: f.BoltSize, BoltsPerBase: f.BoltsPerBase,
+		Governing: governingJSON(f.Governing)}
 }

@@ -70,22 +70,37 @@ func clauseOf(standard, clause string) string {
 	return standard + " " + clause
 }
 
-// footings gives the pad, its bolts and its governing check.
+// footings gives each footing type's pad, its bolts and its governing check.
 func (r Report) footings(s *section) {
-	f := r.Result.Footing
-	if f.Count == 0 {
+	fts := r.Result.Footings()
+	if len(fts) == 0 {
 		s.para("No footing was designed.")
 		return
 	}
-	g := f.Governing
-	s.add(newTable("Item", "Value").
-		row("Pads", fmt.Sprint(f.Count)).
-		row("Square pad side (m)", num(f.WidthM, 3)).
-		row("Pad depth (m)", num(f.DepthM, 3)).
-		row("Concrete, all pads (m³)", num(f.ConcreteM3, 3)).
-		row("Holding-down bolts", fmt.Sprintf("%d × %s per base", f.BoltsPerBase, orDash(f.BoltSize))).
-		row("Governing check", fmt.Sprintf("%s, %s, %s, %s", orDash(g.Check), clauseOf(g.Standard, g.Clause), orDash(g.LimitState), orDash(g.Combination))).
-		row("Utilisation", util(g.Utilisation)))
+	t := newTable("Item")
+	for _, f := range fts {
+		t.head = append(t.head, orDash(f.Bases))
+	}
+	row := func(name string, value func(optimize.Footing) string) {
+		cells := []string{name}
+		for _, f := range fts {
+			cells = append(cells, value(f))
+		}
+		t.row(cells...)
+	}
+	row("Pads", func(f optimize.Footing) string { return fmt.Sprint(f.Count) })
+	row("Square pad side (m)", func(f optimize.Footing) string { return num(f.WidthM, 3) })
+	row("Pad depth (m)", func(f optimize.Footing) string { return num(f.DepthM, 3) })
+	row("Concrete, all pads (m³)", func(f optimize.Footing) string { return num(f.ConcreteM3, 3) })
+	row("Holding-down bolts", func(f optimize.Footing) string {
+		return fmt.Sprintf("%d × %s per base", f.BoltsPerBase, orDash(f.BoltSize))
+	})
+	row("Governing check", func(f optimize.Footing) string {
+		g := f.Governing
+		return fmt.Sprintf("%s, %s, %s, %s", orDash(g.Check), clauseOf(g.Standard, g.Clause), orDash(g.LimitState), orDash(g.Combination))
+	})
+	row("Utilisation", func(f optimize.Footing) string { return util(f.Governing.Utilisation) })
+	s.add(t)
 	if r.calc() != nil {
 		s.para("Every footing and holding-down check is listed with the member checks (section 8).")
 	}
@@ -115,9 +130,9 @@ func (r Report) bill(s *section) {
 		items = append(items, fmt.Sprintf("Steel mass per floor area: %s kg/m² over %s m × %s m.", num(res.MassPerFloorKgM2, 2), short(res.Case.SpanM), short(res.Case.LengthM)))
 	}
 	items = append(items, fmt.Sprintf("Fly braces: %d.", res.FlyBracesPerFrame*res.Frames))
-	if f := res.Footing; f.Count > 0 {
-		items = append(items, fmt.Sprintf("Footings: %d pads, %s m³ of concrete; %d holding-down bolts %s.",
-			f.Count, num(f.ConcreteM3, 3), f.Count*f.BoltsPerBase, orDash(f.BoltSize)))
+	for _, f := range res.Footings() {
+		items = append(items, fmt.Sprintf("Footings at %s: %d pads, %s m³ of concrete; %d holding-down bolts %s.",
+			orDash(f.Bases), f.Count, num(f.ConcreteM3, 3), f.Count*f.BoltsPerBase, orDash(f.BoltSize)))
 	}
 	if res.Cost != 0 {
 		items = append(items, fmt.Sprintf("Cost from the grid's price table: %s (currency units).", num(res.Cost, 2)))
