@@ -31,16 +31,13 @@ the windward edge in the wind direction (m, plan distance).`
 // loadsFlags are the command's inputs.
 type loadsFlags struct {
 	span, length, height, pitch, bay float64
-	class, region                    string
-	terrain                          float64
-	importance, life                 int
-	ms, mt, md                       float64
-	permeability                     string
-	openingWall                      string
-	openingRatio, openingArea        float64
-	deadRoof, deadWall               float64
-	hoistKN, hoistAt                 float64
-	json                             bool
+	siteFlags
+	permeability              string
+	openingWall               string
+	openingRatio, openingArea float64
+	deadRoof, deadWall        float64
+	hoistKN, hoistAt          float64
+	json                      bool
 }
 
 func (f *loadsFlags) register(fs *pflag.FlagSet) {
@@ -49,14 +46,7 @@ func (f *loadsFlags) register(fs *pflag.FlagSet) {
 	fs.Float64Var(&f.height, "height", 0, "eaves height (m)")
 	fs.Float64Var(&f.pitch, "pitch", 0, "roof pitch (degrees, 0–35)")
 	fs.Float64Var(&f.bay, "bay", 6, "frame spacing (m): the frame's tributary area for K_a and the roof live load")
-	fs.StringVar(&f.class, "wind-class", "", "AS 4055 housing wind class: N1–N6, C1–C4 (instead of --region)")
-	fs.StringVar(&f.region, "region", "", "AS/NZS 1170.2:2021 wind region: "+strings.Join(wind.Regions(), ", "))
-	fs.Float64Var(&f.terrain, "terrain", 2, "terrain category: 1, 2, 2.5, 3, 4 (with --region)")
-	fs.IntVar(&f.importance, "importance", 2, "importance level 1–4, AS/NZS 1170.0 (with --region)")
-	fs.IntVar(&f.life, "life", 50, "design working life in years (with --region)")
-	fs.Float64Var(&f.ms, "ms", 1, "shielding multiplier M_s (with --region)")
-	fs.Float64Var(&f.mt, "mt", 1, "topographic multiplier M_t (with --region)")
-	fs.Float64Var(&f.md, "md", 1, "direction multiplier M_d (with --region; 1.0 for any direction)")
+	f.siteFlags.register(fs, 2, 1, "1.0 for any direction")
 	fs.StringVar(&f.permeability, "permeability", "sealed", "Table 5.1(A) case without a dominant opening: sealed (Cpi −0.2, 0.0) or permeable (all walls, −0.3, 0.0)")
 	fs.StringVar(&f.openingWall, "opening-wall", "", "wall with a dominant opening (e.g. a roller door): eave or end; empty for none")
 	fs.Float64Var(&f.openingRatio, "opening-ratio", 0, "dominant opening area over the other walls' and roof's open area (Table 5.1(B))")

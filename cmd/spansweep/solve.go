@@ -48,14 +48,11 @@ bad input.`
 // solveFlags are the command line of the solve command.
 type solveFlags struct {
 	span, length, height, pitch, bay float64
-	class, region                    string
-	terrain                          float64
-	importance, life                 int
-	ms, mt, md                       float64
-	base                             string
-	hoistKN                          float64
-	catalog, grid, report            string
-	json                             bool
+	siteFlags
+	base                  string
+	hoistKN               float64
+	catalog, grid, report string
+	json                  bool
 }
 
 func (f *solveFlags) register(fs *pflag.FlagSet) {
@@ -64,14 +61,7 @@ func (f *solveFlags) register(fs *pflag.FlagSet) {
 	fs.Float64Var(&f.bay, "bay", 0, "bay spacing, frame centres (m)")
 	fs.Float64Var(&f.height, "height", 0, "eaves height (m)")
 	fs.Float64Var(&f.pitch, "pitch", 0, "roof pitch (degrees, 0–35)")
-	fs.StringVar(&f.class, "wind-class", "", "AS 4055-2021 housing wind class: N1–N6, C1–C4 (instead of --region)")
-	fs.StringVar(&f.region, "region", "", "AS/NZS 1170.2:2021 wind region: "+strings.Join(wind.Regions(), ", "))
-	fs.Float64Var(&f.terrain, "terrain", 0, "terrain category with --region: 1, 2, 2.5, 3, 4")
-	fs.IntVar(&f.importance, "importance", 2, "importance level with --region: 1–4 (AS/NZS 1170.0 Table 3.1)")
-	fs.IntVar(&f.life, "life", 50, "design working life in years with --region: 5, 25, 50, 100")
-	fs.Float64Var(&f.ms, "ms", 1, "shielding multiplier M_s with --region (0.7–1)")
-	fs.Float64Var(&f.mt, "mt", 1, "topographic multiplier M_t with --region (1–2)")
-	fs.Float64Var(&f.md, "md", 0, "direction multiplier M_d with --region (0.75–1); 0: the region's any-direction value")
+	f.siteFlags.register(fs, 0, 0, "0: the region's any-direction value")
 	fs.StringVar(&f.base, "base", grids.BasePinned, "column bases: pinned or fixed")
 	fs.Float64Var(&f.hoistKN, "hoist-kn", 0, "hoist point load hung from the rafter at mid-span (kN); 0 for none")
 	fs.StringVar(&f.catalog, "catalog", "", "section catalogue CSV `FILE`; default: the embedded RS series")
