@@ -1,7 +1,6 @@
 package optimize
 
 import (
-	"cmp"
 	"fmt"
 	"math"
 	"slices"
@@ -9,6 +8,7 @@ import (
 	"github.com/spansweep/spansweep/catalog"
 	"github.com/spansweep/spansweep/checks/actions"
 	"github.com/spansweep/spansweep/checks/analysis"
+	"github.com/spansweep/spansweep/checks/coldformed"
 	"github.com/spansweep/spansweep/grids"
 )
 
@@ -93,20 +93,26 @@ func frameShapes(families []string) []catalog.Shape {
 }
 
 // candidates lists every rafter and column pair (and its knee-braced
-// variant), sorted by the lower bound on its mass per frame.
+// variant) in enumeration order, each with the lower bound on its mass per
+// frame; search visits them in order of that bound (candidateQueue).
 func (m *frameModel) candidates() []frameCandidate {
 	var secs []catalog.Section
+	var caps []*coldformed.Capacities
 	for _, s := range frameShapes(m.d.c.Options.Members.FrameFamilies) {
 		for _, sec := range m.d.cat.ByShape(s) {
-			if _, err := m.caps.of(sec); err == nil {
-				secs = append(secs, sec)
+			if c, err := m.caps.of(sec); err == nil {
+				secs, caps = append(secs, sec), append(caps, c)
 			}
 		}
 	}
 	g := &m.g
 	minBrace := 2 * m.brace0.MassKgPerM * m.kneeBraceLengthMM(analysis.KneeBrace{
 		ColumnMM: kneeColumnMin * g.heightMM, RafterMM: kneeRafterMin * g.rafterMM}) / 1e3
-	var out []frameCandidate
+	variants := 1
+	if m.d.c.Options.Members.KneeBraces {
+		variants = 2
+	}
+	out := make([]frameCandidate, 0, variants*len(secs)*len(secs))
 	pair := 0
 	for i := range secs {
 		for j := range secs {
@@ -115,23 +121,75 @@ func (m *frameModel) candidates() []frameCandidate {
 				continue
 			}
 			pair++
-			rc, _ := m.caps.of(*r)
-			cc, _ := m.caps.of(*c)
-			cd := frameCandidate{rafter: r, column: c, rCap: rc, cCap: cc, pair: pair,
+			cd := frameCandidate{rafter: r, column: c, rCap: caps[i], cCap: caps[j], pair: pair,
 				massLB: 2*g.rafterMM/1e3*r.MassKgPerM + 2*g.heightMM/1e3*c.MassKgPerM}
 			out = append(out, cd)
-			if m.d.c.Options.Members.KneeBraces {
+			if variants == 2 {
 				cd.braced, cd.massLB = true, cd.massLB+minBrace
 				out = append(out, cd)
 			}
 		}
 	}
-	// Ties keep enumeration order (pair, then unbraced first), so the
-	// order is deterministic without a stable sort.
-	slices.SortFunc(out, func(a, b frameCandidate) int {
-		return cmp.Or(cmp.Compare(a.massLB, b.massLB), cmp.Compare(a.pair, b.pair), cmpBool(a.braced, b.braced))
-	})
 	return out
+}
+
+// candidateQueue yields candidates in order of their mass lower bound, ties
+// in enumeration order (pair, then unbraced first: the index in the
+// candidates list), a total order, so the sequence is the same as a full
+// sort's. It is a binary heap of indices: the search usually stops after a
+// small part of the list, which is then never ordered.
+type candidateQueue struct {
+	cands []frameCandidate
+	heap  []int32
+}
+
+func newCandidateQueue(cands []frameCandidate) *candidateQueue {
+	q := &candidateQueue{cands: cands, heap: make([]int32, len(cands))}
+	for i := range q.heap {
+		q.heap[i] = int32(i)
+	}
+	for i := len(q.heap)/2 - 1; i >= 0; i-- {
+		q.down(i)
+	}
+	return q
+}
+
+// less orders candidates a and b (indices) by bound, then index.
+func (q *candidateQueue) less(a, b int32) bool {
+	la, lb := q.cands[a].massLB, q.cands[b].massLB
+	return la < lb || (la == lb && a < b)
+}
+
+func (q *candidateQueue) down(i int) {
+	h := q.heap
+	for {
+		l := 2*i + 1
+		if l >= len(h) {
+			return
+		}
+		c := l
+		if r := l + 1; r < len(h) && q.less(h[r], h[l]) {
+			c = r
+		}
+		if !q.less(h[c], h[i]) {
+			return
+		}
+		h[i], h[c] = h[c], h[i]
+		i = c
+	}
+}
+
+// next returns the next candidate in order, or false when none is left.
+func (q *candidateQueue) next() (*frameCandidate, bool) {
+	n := len(q.heap)
+	if n == 0 {
+		return nil, false
+	}
+	top := q.heap[0]
+	q.heap[0] = q.heap[n-1]
+	q.heap = q.heap[:n-1]
+	q.down(0)
+	return &q.cands[top], true
 }
 
 // searchResult is the outcome of the search: the chosen candidate, or the
@@ -152,7 +210,13 @@ func (m *frameModel) search(cands []frameCandidate) (searchResult, bool, error) 
 	var best, bestFail searchResult
 	found := false
 	bestFail.ratio = math.Inf(1)
-	for _, cd := range cands {
+	q := newCandidateQueue(cands)
+	for {
+		next, ok := q.next()
+		if !ok {
+			break
+		}
+		cd := *next
 		if found && !exhaustive && cd.massLB > best.o.massKg {
 			break
 		}
@@ -160,7 +224,7 @@ func (m *frameModel) search(cands []frameCandidate) (searchResult, bool, error) 
 			continue
 		}
 		if !exhaustive {
-			if ok, ratio := m.boundPasses(&cd); !ok {
+			if ok, ratio := m.boundPasses(&cd, m.boundNeed(found, &bestFail)); !ok {
 				failed[cd.pair] = true
 				if !found && ratio < bestFail.ratio && (bestFail.bounded || bestFail.checked == 0) {
 					bestFail = searchResult{cd: cd, bounded: true, ratio: ratio}
@@ -196,6 +260,17 @@ func (m *frameModel) search(cands []frameCandidate) (searchResult, bool, error) 
 		return bestFail, false, nil
 	}
 	return best, true, nil
+}
+
+// boundNeed is the statics bound ratio below which search needs its exact
+// value: a bound failure replaces the best failure only while nothing has
+// passed, no candidate has been analysed and failed, and its ratio is
+// lower. Above it boundPasses may stop at the verdict (-Inf: verdict only).
+func (m *frameModel) boundNeed(found bool, bestFail *searchResult) float64 {
+	if !found && (bestFail.bounded || bestFail.checked == 0) {
+		return bestFail.ratio
+	}
+	return math.Inf(-1)
 }
 
 // evaluateCandidate evaluates a candidate and totals its mass per frame.
@@ -249,15 +324,4 @@ func (r searchResult) reason(m *frameModel) string {
 	}
 	return fmt.Sprintf("no section pair passes: best %s at utilisation %.2f, failing %s (%s %s) under %s",
 		pair, r.o.util, gov.Check, gov.Standard, gov.Clause, gov.Combination)
-}
-
-// cmpBool orders false before true.
-func cmpBool(a, b bool) int {
-	switch {
-	case a == b:
-		return 0
-	case a:
-		return 1
-	}
-	return -1
 }

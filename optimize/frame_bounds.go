@@ -63,7 +63,7 @@ func (m *frameModel) gravityLoads() []gravityLoad {
 // max(|M_knee|, |M_ridge|) ≥ (wL²/8)/(1 + (h+f)/h) for a uniform w.
 func (m *frameModel) mechanismWork(gl gravityLoad, xb, rafterKgPerM, braceN float64) (w, thB, thC, thBase float64) {
 	g := &m.g
-	tan := math.Tan(g.pitchRad)
+	tan := g.tanPitch
 	half := g.spanMM / 2
 	hb := g.heightMM + xb*tan
 	lx := half - xb
@@ -74,7 +74,7 @@ func (m *frameModel) mechanismWork(gl gravityLoad, xb, rafterKgPerM, braceN floa
 		}
 		return -xb + (delta+xb)*(x-xb)/lx
 	}
-	wp := gl.wPlan + gl.rafterSW*rafterKgPerM*analysis.Gravity*1e-3/math.Cos(g.pitchRad)
+	wp := gl.wPlan + gl.rafterSW*rafterKgPerM*analysis.Gravity*1e-3/g.cosPitch
 	side := -wp*xb*xb/2 + wp*lx*(delta-xb)/2 - braceN*xb/2
 	for _, x := range gl.purlinsX {
 		side += gl.purlinN * v(x)
@@ -99,20 +99,24 @@ func sectionMoment(c *coldformed.Capacities) float64 {
 // With knee braces the side hinge is on the rafter at the brace, taken at
 // the most favourable of 17 positions over the placement range with a 1 %
 // margin for positions between them. The ratio returned is the work over
-// the hinge capacity (> 1 fails).
-func (m *frameModel) boundPasses(cd *frameCandidate) (bool, float64) {
+// the hinge capacity (> 1 fails). The ratio is exact when at most 1 or
+// below need; otherwise it may be a lower bound at or above both (the
+// search needs the value only to rank failures below the best so far).
+func (m *frameModel) boundPasses(cd *frameCandidate, need float64) (bool, float64) {
 	g := &m.g
 	if g.pitchRad < 1e-3 {
 		return true, 0
 	}
 	cc := cd.cCap
-	ley := newMemberSpec(columnKind, *cd.column, cc, g.heightMM, g.girtsMM).ley
-	nc, _ := cc.MemberCompression(coldformed.EffectiveLengths{Lex: lexFloor, Ley: ley, Lez: ley})
-	phiN := coldformed.PhiCompression * math.Min(nc, cc.Ncd)
+	phiN := m.columnPhiNBound(cd)
 	phiNs := coldformed.PhiCompression * cc.Ns
 	msR, msC := sectionMoment(cd.rCap), sectionMoment(cc)
+	if m.gravity == nil {
+		m.gravity = m.gravityLoads()
+	}
+	stop := max(need, math.Nextafter(1, 2)) // at or above: the verdict and the rank are known
 	worst := 0.0
-	for _, gl := range m.gravityLoads() {
+	for _, gl := range m.gravity {
 		if gl.hoistOffC {
 			continue
 		}
@@ -134,13 +138,34 @@ func (m *frameModel) boundPasses(cd *frameCandidate) (bool, float64) {
 		} else {
 			for i := 0; i <= 16; i++ {
 				a := (kneeRafterMin + (kneeRafterMax-kneeRafterMin)*float64(i)/16) * g.rafterMM
-				ratio = math.Min(ratio, m.mechanismRatio(gl, a*math.Cos(g.pitchRad), cd, msR, msR, reduce(nBase), braceN)/1.01)
+				ratio = math.Min(ratio, m.mechanismRatio(gl, a*g.cosPitch, cd, msR, msR, reduce(nBase), braceN)/1.01)
 			}
 		}
 		worst = math.Max(worst, ratio)
+		if worst >= stop {
+			return false, worst
+		}
 	}
-	worst = math.Max(worst, m.mechanismBound(cd))
+	worst = math.Max(worst, m.mechanismBound(cd, stop))
 	return worst <= 1, worst
+}
+
+// columnPhiNBound is the column's φN_c with l_ex → 0 (cl. 3.4.1, 3.4.6),
+// at most φN_cd, computed once per column section and case.
+func (m *frameModel) columnPhiNBound(cd *frameCandidate) float64 {
+	cc := cd.cCap
+	if phiN, ok := m.phiNBound[cc]; ok {
+		return phiN
+	}
+	if m.phiNBound == nil {
+		m.phiNBound = map[*coldformed.Capacities]float64{}
+		m.columnLey = newMemberSpec(columnKind, *cd.column, cc, m.g.heightMM, m.g.girtsMM).ley
+	}
+	ley := m.columnLey // the girt spacing: the same for every column section
+	nc, _ := cc.MemberCompression(coldformed.EffectiveLengths{Lex: lexFloor, Ley: ley, Lez: ley})
+	phiN := coldformed.PhiCompression * math.Min(nc, cc.Ncd)
+	m.phiNBound[cc] = phiN
+	return phiN
 }
 
 // mechanismRatio is the loads' work over the hinges' capacity.

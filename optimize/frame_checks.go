@@ -2,7 +2,7 @@ package optimize
 
 import (
 	"math"
-	"sort"
+	"slices"
 
 	"github.com/spansweep/spansweep/catalog"
 	"github.com/spansweep/spansweep/checks/analysis"
@@ -55,7 +55,7 @@ func newMemberSpec(kind memberKind, sec catalog.Section, cap *coldformed.Capacit
 	}
 	s.outer = append(s.outer, length)
 	for i := 1; i < len(s.outer); i++ {
-		s.ley = math.Max(s.ley, s.outer[i]-s.outer[i-1])
+		s.ley = max(s.ley, s.outer[i]-s.outer[i-1])
 	}
 	return s
 }
@@ -79,13 +79,13 @@ func (m *frameModel) inputs(s *memberSpec, k, comb int, lambda float64) partInpu
 	f := m.combine(k, comb)
 	in := partInputs{n: math.Inf(-1), lex: lexFloor}
 	for _, x := range f {
-		in.n = math.Max(in.n, -x.N)
+		in.n = max(in.n, -x.N)
 		if v := math.Abs(x.V); v > in.v {
 			in.v, in.mAtV = v, math.Abs(x.M)
 		}
 	}
 	if in.n > 0 && !math.IsInf(lambda, 1) && lambda > 0 {
-		in.lex = math.Max(lexFloor, math.Pi*math.Sqrt(coldformed.E*s.sec.IxMM4/(lambda*in.n)))
+		in.lex = max(lexFloor, math.Pi*math.Sqrt(coldformed.E*s.sec.IxMM4/(lambda*in.n)))
 	}
 	return in
 }
@@ -114,10 +114,10 @@ func (m *frameModel) segmentOf(k int, f []analysis.Forces, a, b float64) segment
 	sg := segment{from: a, to: b}
 	const tol = 1e-6
 	take := func(v float64) {
-		sg.sag = math.Max(sg.sag, v)
-		sg.hog = math.Max(sg.hog, -v)
+		sg.sag = max(sg.sag, v)
+		sg.hog = max(sg.hog, -v)
 	}
-	j0 := sort.Search(len(st), func(j int) bool { return st[j].along >= a-tol })
+	j0 := firstStation(st, func(along float64) bool { return along >= a-tol })
 	for j := j0; j < len(st); j++ {
 		x := st[j].along
 		if x > b+tol {
@@ -138,7 +138,7 @@ func (m *frameModel) segmentOf(k int, f []analysis.Forces, a, b float64) segment
 	}
 	// Capped at 2.3, the largest C_b that coldformed.Segment accepts (the
 	// usual cap on the cl. 3.3.3.2.1 factor).
-	sg.cbPos = math.Min(maxCb, coldformed.MomentGradientCb(math.Max(sg.sag, sg.hog), mq[0], mq[1], mq[2]))
+	sg.cbPos = min(maxCb, coldformed.MomentGradientCb(max(sg.sag, sg.hog), mq[0], mq[1], mq[2]))
 	sg.cbNeg = sg.cbPos
 	return sg
 }
@@ -146,7 +146,7 @@ func (m *frameModel) segmentOf(k int, f []analysis.Forces, a, b float64) segment
 // momentAt is the exact moment at x on part k from the station forces.
 func (m *frameModel) momentAt(k int, f []analysis.Forces, x float64) float64 {
 	st := m.top.stations[k]
-	i := sort.Search(len(st), func(j int) bool { return st[j].along > x })
+	i := firstStation(st, func(along float64) bool { return along > x })
 	switch {
 	case i == 0:
 		return f[0].M
@@ -157,6 +157,22 @@ func (m *frameModel) momentAt(k int, f []analysis.Forces, x float64) float64 {
 	x0, x1 := st[j].along, st[i].along
 	dx := x - x0
 	return f[j].M + f[j].V*dx + (f[i].V-f[j].V)/(x1-x0)*dx*dx/2
+}
+
+// firstStation is sort.Search over the stations' positions: the first
+// index whose position satisfies the monotone test, len(st) if none. A
+// plain loop the compiler inlines with its test.
+func firstStation(st []station, test func(along float64) bool) int {
+	lo, hi := 0, len(st)
+	for lo < hi {
+		h := int(uint(lo+hi) >> 1)
+		if test(st[h].along) {
+			hi = h
+		} else {
+			lo = h + 1
+		}
+	}
+	return lo
 }
 
 // momentRatio is M*/φM_b of a segment for the outer (top) or inner flange
@@ -171,20 +187,26 @@ func momentRatio(c *coldformed.Capacities, mStar, length, cb float64, outer bool
 	if outer {
 		mbd = c.MbdTop
 	}
-	return mStar / (coldformed.PhiBending * math.Min(mb, mbd))
+	return mStar / (coldformed.PhiBending * min(mb, mbd))
 }
 
 // check runs the AS/NZS 4600:2018 cl. 3.5 beam-column check of one
 // segment: the outer flange (Geometry.FlangeMM, "top") in compression for
 // sagging (tension inside), the inner for hogging.
 func (s *memberSpec) check(in partInputs, mStar, length, cb float64, outer bool) (coldformed.MemberResult, error) {
+	return s.checkInto(make([]coldformed.Check, 0, 12), in, mStar, length, cb, outer)
+}
+
+// checkInto is check with the result's checks in buf's storage (valid
+// until buf is reused).
+func (s *memberSpec) checkInto(buf []coldformed.Check, in partInputs, mStar, length, cb float64, outer bool) (coldformed.MemberResult, error) {
 	mx := mStar
 	if !outer {
 		mx = -mStar
 	}
-	return coldformed.CheckBeamColumn(s.cap, coldformed.BeamColumn{
+	return coldformed.CheckBeamColumnInto(buf, s.cap, coldformed.BeamColumn{
 		Compression: coldformed.EffectiveLengths{Lex: in.lex, Ley: s.ley, Lez: s.ley},
-		Bending:     coldformed.Segment{Length: math.Max(length, 1), Cb: cb},
+		Bending:     coldformed.Segment{Length: max(length, 1), Cb: cb},
 	}, coldformed.BeamColumnActions{N: in.n, Mx: mx, V: in.v, MomentAtShear: in.mAtV})
 }
 
@@ -200,7 +222,9 @@ type checkedSegment struct {
 // worstSegment checks the most critical segment between the given
 // restraints (canonical) of part k under comb for one flange; ok is false
 // when no segment has that flange in compression (and, for the outer
-// flange, none is checked).
+// flange, none is checked). The result's check list is in m.checkBuf's
+// storage for that flange, valid until the next worstSegment of the flange
+// (keep it with checkedSegment.kept).
 func (m *frameModel) worstSegment(s *memberSpec, k, comb int, in partInputs, f []analysis.Forces, restraints []float64, outer bool) (checkedSegment, error) {
 	best, bestRatio := segment{}, -1.0
 	for i := 1; i < len(restraints); i++ {
@@ -223,9 +247,28 @@ func (m *frameModel) worstSegment(s *memberSpec, k, comb int, in partInputs, f [
 			return checkedSegment{comb: comb, part: k, outer: outer, util: u}, nil
 		}
 	}
-	res, err := s.check(in, mStar, best.to-best.from, best.cbPos, outer)
+	buf := &m.checkBuf[flangeIndex(outer)]
+	res, err := s.checkInto(*buf, in, mStar, best.to-best.from, best.cbPos, outer)
 	if err != nil {
 		return checkedSegment{}, err
 	}
+	*buf = res.Checks
 	return checkedSegment{comb: comb, part: k, outer: outer, res: res, util: res.Utilisation()}, nil
+}
+
+// flangeIndex numbers the inner (0) and outer (1) flange.
+func flangeIndex(outer bool) int {
+	if outer {
+		return 1
+	}
+	return 0
+}
+
+// kept returns cs with its own copy of the check list (worstSegment's is
+// in a reused buffer).
+func (cs checkedSegment) kept() checkedSegment {
+	if cs.res.Checks != nil {
+		cs.res.Checks = slices.Clone(cs.res.Checks)
+	}
+	return cs
 }

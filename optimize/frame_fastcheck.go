@@ -1,10 +1,6 @@
 package optimize
 
-import (
-	"math"
-
-	"github.com/spansweep/spansweep/checks/coldformed"
-)
+import "github.com/spansweep/spansweep/checks/coldformed"
 
 // fastUtilisation is the beam-column utilisation of a segment in
 // compression (or with no axial force) when there is no in-plane
@@ -23,16 +19,16 @@ func (s *memberSpec) fastUtilisation(in partInputs, mStar, length, cb float64, o
 	c := s.cap
 	if s.phiNc0 == 0 {
 		nc, _ := c.MemberCompression(coldformed.EffectiveLengths{Lex: lexFloor, Ley: s.ley, Lez: s.ley})
-		s.phiNc0 = coldformed.PhiCompression * math.Min(nc, c.Ncd)
+		s.phiNc0 = coldformed.PhiCompression * min(nc, c.Ncd)
 	}
 	u := in.n / s.phiNc0
 	if mStar > 0 {
-		u += momentRatio(c, mStar, math.Max(length, 1), cb, outer)
+		u += momentRatio(c, mStar, max(length, 1), cb, outer)
 	}
 	if in.v > 0 || in.mAtV > 0 {
 		vr := in.v / (coldformed.PhiShear * c.Vv)
-		mr := in.mAtV / (coldformed.PhiBending * math.Min(c.MsTop, c.MsBot))
-		u = math.Max(u, math.Max(vr, mr*mr+vr*vr))
+		mr := in.mAtV / (coldformed.PhiBending * min(c.MsTop, c.MsBot))
+		u = max(u, max(vr, mr*mr+vr*vr))
 	}
 	return u, true
 }

@@ -13,6 +13,7 @@ import (
 // units (N, mm) and the loads it carries that do not depend on its sections.
 type frameGeometry struct {
 	spanMM, heightMM, pitchRad float64
+	cosPitch, tanPitch         float64
 	rafterMM                   float64 // slope length of one rafter, eave to apex
 	riseMM                     float64
 	tributaryM                 float64   // width of roof and wall the frame carries
@@ -39,6 +40,7 @@ func (d *designer) newFrameGeometry() frameGeometry {
 	a := c.RoofPitchDeg * math.Pi / 180
 	g := frameGeometry{spanMM: c.SpanM * 1e3, heightMM: c.EavesHeightM * 1e3, pitchRad: a,
 		tributaryM: tributaryWidthM(c.Bays, c.BaySpacingM)}
+	g.cosPitch, g.tanPitch = math.Cos(a), math.Tan(a)
 	g.rafterMM = g.spanMM / 2 / math.Cos(a)
 	g.riseMM = g.spanMM / 2 * math.Tan(a)
 	g.purlinsMM = linePositionsMM(d.purlin.PositionsM, g.rafterMM, c.Options.Cladding.MaxPurlinSpacingM)

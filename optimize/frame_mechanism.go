@@ -39,10 +39,19 @@ type mechanismPlace struct {
 	work    [2][]float64 // per primary, self weight excluded
 	rafterW [2]float64   // per kg/m of rafter self weight
 	columnW [2]float64   // per kg/m of column self weight
+	// Candidate-independent parts of placeRatio, summed in its order:
+	// ulsW[i] is the work of ULS combination m.uls[i] without self weight,
+	// coef[k][h] the rotation |a·Δθ_spread,h + b·Δθ_sway,h| of hinge h in
+	// mix k of mechanismCombos.
+	ulsW [][2]float64
+	coef [nMixes][nHinges]float64
 }
 
+// nMixes is len(mechanismCombos).
+const nMixes = 8
+
 // mechanismCombos are the mixes (spreading, sway) tried for the bound.
-var mechanismCombos = [][2]float64{{1, 0}, {0, 1}, {1, 0.5}, {1, -0.5}, {1, 1}, {1, -1}, {1, 2}, {1, -2}}
+var mechanismCombos = [nMixes][2]float64{{1, 0}, {0, 1}, {1, 0.5}, {1, -0.5}, {1, 1}, {1, -1}, {1, 2}, {1, -2}}
 
 // newMechanisms solves the plain frame once under every primary case
 // without self weight and under unit rafter and column self weights, and
@@ -138,17 +147,50 @@ func (m *frameModel) newMechanisms() ([]mechanismPlace, error) {
 		}
 		out = append(out, mp)
 	}
+	m.tabulateMechanisms(out)
 	return out, nil
 }
 
-// mechanismRatio returns the largest ratio of load work to hinge capacity
+// tabulateMechanisms fills the candidate-independent terms of placeRatio
+// (each ULS combination's work without self weight, the hinges' rotations
+// per mix) and the model's ULS dead-load factors and mix weights.
+func (m *frameModel) tabulateMechanisms(places []mechanismPlace) {
+	m.ulsFG = make([]float64, len(m.uls))
+	for i, c := range m.uls {
+		m.ulsFG[i] = m.d.act.Combinations[c].FactorOn(actions.G)
+	}
+	for k, ab := range mechanismCombos {
+		m.mixAbs[k] = math.Abs(ab[0]) + math.Abs(ab[1])
+	}
+	for p := range places {
+		mp := &places[p]
+		mp.ulsW = make([][2]float64, len(m.uls))
+		for i, c := range m.uls {
+			for j := range 2 {
+				for _, t := range m.combs[c] {
+					mp.ulsW[i][j] += t.Factor * mp.work[j][t.Case]
+				}
+			}
+		}
+		for k, ab := range mechanismCombos {
+			for h := range nHinges {
+				mp.coef[k][h] = math.Abs(ab[0]*mp.dth[0][h] + ab[1]*mp.dth[1][h])
+			}
+		}
+	}
+}
+
+// placeRatio returns the largest ratio of load work to hinge capacity
 // over the ULS combinations and mechanism mixes at one place: above 1, no
 // moment field within the capacities φM_s (cl. 3.3.2) can carry the loads.
 // Side hinges are at the knee (the weaker of rafter and column) or on the
 // rafter at the knee brace; bases are hinges only when fixed. With a knee
 // brace its own weight (at most braceN per brace, at plan xb/2 on the side
-// parts) is taken off the work.
-func (m *frameModel) placeRatio(mp *mechanismPlace, cd *frameCandidate, braceN float64) float64 {
+// parts) is taken off the work. It may return early with a value at or
+// above stopAt once the ratio is known to reach it (+Inf: never).
+// The candidate-independent terms come from tabulateMechanisms, in the
+// same order of operations, so the ratio does not depend on the tables.
+func (m *frameModel) placeRatio(mp *mechanismPlace, cd *frameCandidate, braceN, stopAt float64) float64 {
 	msR, msC := sectionMoment(cd.rCap), sectionMoment(cd.cCap)
 	var capH [nHinges]float64
 	capH[hC] = msR
@@ -162,25 +204,42 @@ func (m *frameModel) placeRatio(mp *mechanismPlace, cd *frameCandidate, braceN f
 	if m.d.c.Base == grids.BaseFixed {
 		capH[hLB], capH[hRB] = msC, msC
 	}
-	worst := 0.0
-	for _, c := range m.uls {
-		fg := m.d.act.Combinations[c].FactorOn(actions.G)
-		var w [2]float64
-		for j := range 2 {
-			for _, t := range m.combs[c] {
-				w[j] += t.Factor * mp.work[j][t.Case]
-			}
-			w[j] += fg * (cd.rafter.MassKgPerM*mp.rafterW[j] + cd.column.MassKgPerM*mp.columnW[j])
+	var capacity [nMixes]float64
+	for k := range nMixes {
+		for h := range nHinges {
+			capacity[k] += capH[h] * mp.coef[k][h]
 		}
-		for _, ab := range mechanismCombos {
-			work := math.Abs(ab[0]*w[0]+ab[1]*w[1]) - fg*braceN*mp.xb*(math.Abs(ab[0])+math.Abs(ab[1]))
-			var capacity float64
-			for h := range nHinges {
-				capacity += capH[h] * math.Abs(ab[0]*mp.dth[0][h]+ab[1]*mp.dth[1][h])
+	}
+	rKg, cKg := cd.rafter.MassKgPerM, cd.column.MassKgPerM
+	sw := [2]float64{rKg*mp.rafterW[0] + cKg*mp.columnW[0], rKg*mp.rafterW[1] + cKg*mp.columnW[1]}
+	// The combinations are tried from the one that gave the last largest
+	// ratio (the maximum does not depend on the order; an early stop comes
+	// sooner).
+	worst := 0.0
+	n := len(m.ulsFG)
+	start := m.placeComb % max(n, 1)
+	for step := range n {
+		i := start + step
+		if i >= n {
+			i -= n
+		}
+		fg := m.ulsFG[i]
+		w0 := mp.ulsW[i][0] + fg*sw[0]
+		w1 := mp.ulsW[i][1] + fg*sw[1]
+		brace := fg * braceN * mp.xb
+		before := worst
+		for k := range nMixes {
+			if capacity[k] > 0 {
+				ab := &mechanismCombos[k]
+				work := math.Abs(ab[0]*w0+ab[1]*w1) - brace*m.mixAbs[k]
+				worst = max(worst, work/capacity[k])
 			}
-			if capacity > 0 {
-				worst = math.Max(worst, work/capacity)
-			}
+		}
+		if worst > before {
+			m.placeComb = i
+		}
+		if worst >= stopAt {
+			return worst
 		}
 	}
 	return worst
@@ -188,25 +247,55 @@ func (m *frameModel) placeRatio(mp *mechanismPlace, cd *frameCandidate, braceN f
 
 // mechanismBound is the candidate's mechanism ratio: at the knee without
 // knee braces; with them, at the most favourable of the tabulated brace
-// positions, with a 1 % margin for positions between them.
-func (m *frameModel) mechanismBound(cd *frameCandidate) float64 {
+// positions, with a 1 % margin for positions between them. Each minimum
+// starts from the place that gave the last candidate's (a low first value
+// lets placeRatio stop early at the others; the minimum is the same).
+// The ratio is exact below stop (> 1, +Inf: always); at or above it, it
+// may be a lower bound at or above stop.
+func (m *frameModel) mechanismBound(cd *frameCandidate, stop float64) float64 {
 	if len(m.mech) == 0 {
 		return 0
 	}
+	// A braced place ratio at or above failAtBraced gives a bound at or
+	// above stop after the 1 % margin (1.02/1.01 > 1 leaves room for
+	// rounding).
+	failAt, failAtBraced := stop, stop*1.02
 	if !cd.braced {
-		return m.placeRatio(&m.mech[0], cd, 0)
+		return m.placeRatio(&m.mech[0], cd, 0, failAt)
 	}
 	braceN := m.heaviestC.MassKgPerM * analysis.Gravity * 1e-3 * math.Hypot(m.g.heightMM, m.g.rafterMM)
 	// The rafter and column hinge places are independent: the brace's
 	// rafter end sets one, its column end the other.
-	rafter, column := math.Inf(1), math.Inf(1)
-	for i := 1; i < len(m.mech); i++ {
-		mp := &m.mech[i]
-		if mp.column {
-			column = math.Min(column, m.placeRatio(mp, cd, braceN))
-		} else {
-			rafter = math.Min(rafter, m.placeRatio(mp, cd, braceN))
+	rafter := m.leastPlaceRatio(cd, braceN, false, &m.bestPlace[0], failAtBraced)
+	if rafter >= failAtBraced {
+		return rafter / 1.01
+	}
+	column := m.leastPlaceRatio(cd, braceN, true, &m.bestPlace[1], failAtBraced)
+	return math.Max(rafter, column) / 1.01
+}
+
+// leastPlaceRatio is the least placeRatio over the knee-brace places of one
+// kind (column sway places or rafter places), trying *first first and
+// leaving there the place of the least. A place is abandoned once its
+// ratio reaches the least so far or failAt: the least is exact when below
+// failAt, and otherwise at least failAt.
+func (m *frameModel) leastPlaceRatio(cd *frameCandidate, braceN float64, column bool, first *int, failAt float64) float64 {
+	least := math.Inf(1)
+	try := func(i int) {
+		if mp := &m.mech[i]; mp.column == column {
+			if r := m.placeRatio(mp, cd, braceN, min(least, failAt)); r < least {
+				least, *first = r, i
+			}
 		}
 	}
-	return math.Max(rafter, column) / 1.01
+	start := *first
+	if start >= 1 && start < len(m.mech) {
+		try(start)
+	}
+	for i := 1; i < len(m.mech); i++ {
+		if i != start {
+			try(i)
+		}
+	}
+	return least
 }

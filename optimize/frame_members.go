@@ -75,8 +75,12 @@ func (m *frameModel) evaluateMember(s *memberSpec, l *lambdas, mode flyMode, giv
 					}
 					continue
 				}
-				for _, cs := range []checkedSegment{o, i} {
-					if cs.util > out.util || !haveGov {
+				for _, cs := range [2]checkedSegment{o, i} {
+					gov := cs.util > out.util || !haveGov
+					if gov || record {
+						cs = cs.kept()
+					}
+					if gov {
 						out.util, out.gov, haveGov = cs.util, cs, true
 					}
 					if record {

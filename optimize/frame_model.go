@@ -48,10 +48,17 @@ type frameModel struct {
 	hasW      []bool // combination includes wind
 	plain     *frameTopology
 	caps      *capacityTable
-	brace0    catalog.Section  // lightest C: the knee brace stiffness in analysis and the fly-brace item
-	heaviestC catalog.Section  // for conservative brace weights in bounds
-	mech      []mechanismPlace // statics bounds' mechanisms; nil for a flat roof
-	kneeStart *frameTopology   // the knee-braced portal at the start of the placement search
+	brace0    catalog.Section                    // lightest C: the knee brace stiffness in analysis and the fly-brace item
+	heaviestC catalog.Section                    // for conservative brace weights in bounds
+	mech      []mechanismPlace                   // statics bounds' mechanisms; nil for a flat roof
+	ulsFG     []float64                          // dead-load factor of each m.uls combination (mechanism bounds)
+	mixAbs    [nMixes]float64                    // |a| + |b| of each mechanismCombos mix
+	placeComb int                                // the m.uls index that gave placeRatio's last largest ratio
+	bestPlace [2]int                             // rafter and column knee-brace places of the last least ratio
+	gravity   []gravityLoad                      // gravityLoads, once per case
+	columnLey float64                            // the columns' l_ey (girt spacing), the same for every section
+	phiNBound map[*coldformed.Capacities]float64 // boundPasses' φN_c with l_ex → 0 per column section
+	kneeStart *frameTopology                     // the knee-braced portal at the start of the placement search
 	// fast selects fastUtilisation where it applies (λc = ∞ stages, no
 	// recording): it gives utilisations only, no check lists.
 	fast bool
@@ -64,6 +71,9 @@ type frameModel struct {
 	cv [4][][]analysis.Forces
 	// Axial force of each buckling element per primary, for the λ bound.
 	elemN [][]float64
+	// checkBuf holds the inner- and outer-flange check lists of the last
+	// segment checks (worstSegment, innerPasses), reused between them.
+	checkBuf [2][]coldformed.Check
 }
 
 // newTopology builds the portal for knee brace kb (nil: none).

@@ -6,6 +6,8 @@ import (
 
 	"gonum.org/v1/gonum/blas"
 	"gonum.org/v1/gonum/blas/blas64"
+	"gonum.org/v1/gonum/lapack"
+	"gonum.org/v1/gonum/lapack/lapack64"
 	"gonum.org/v1/gonum/mat"
 )
 
@@ -38,6 +40,8 @@ type buckleScratch struct {
 	eig    mat.EigenSym
 	vecs   mat.Dense
 	mode   []float64
+	work   []float64 // dsyev work, sized for workN equations
+	workN  int
 }
 
 // ErrNotFactored is returned by Buckle when the solution has no stiffness to buckle.
@@ -154,26 +158,30 @@ func (s *Solution) refine(comb Combination, nsub int, rf *Frame) *Frame {
 func (bs *buckleScratch) solveEigen(r *Workspace, nn int, mode bool) (Buckling, error) {
 	n := r.n
 	bs.y = reuseDense(bs.y, n, n)
+	y := bs.y.RawMatrix()
+	g := bs.g.RawSymmetric() // upper triangle
 	for i := range n {
 		for j := range n {
-			bs.y.Set(i, j, -bs.g.At(i, j))
+			if i <= j {
+				y.Data[i*y.Stride+j] = -g.Data[i*g.Stride+j]
+			} else {
+				y.Data[i*y.Stride+j] = -g.Data[j*g.Stride+i]
+			}
 		}
 	}
 	u := r.u
-	y := bs.y.RawMatrix()
 	blas64.Trsm(blas.Left, blas.Trans, 1, u, y)
 	blas64.Trsm(blas.Right, blas.NoTrans, 1, u, y)
 	bs.a = reuseSym(bs.a, n)
+	a := bs.a.RawSymmetric()
 	for i := range n {
 		for j := i; j < n; j++ {
-			bs.a.SetSym(i, j, (bs.y.At(i, j)+bs.y.At(j, i))/2)
+			a.Data[i*a.Stride+j] = (y.Data[i*y.Stride+j] + y.Data[j*y.Stride+i]) / 2
 		}
 	}
-	if !bs.eig.Factorize(bs.a, mode) {
-		return Buckling{}, errors.New("analysis: buckling eigenproblem did not converge")
+	if err := bs.eigenvalues(n, mode); err != nil {
+		return Buckling{}, err
 	}
-	bs.vals = grow(bs.vals, n)
-	bs.eig.Values(bs.vals)
 	mu := bs.vals[n-1]
 	if !(mu > 1e-9*math.Max(mu, -bs.vals[0])) { // rounding-level positive values mean no compression
 		return Buckling{Factor: math.Inf(1)}, nil
@@ -207,6 +215,33 @@ func (bs *buckleScratch) solveEigen(r *Workspace, nn int, mode bool) (Buckling, 
 	}
 	return Buckling{Factor: 1 / mu, mode: bs.mode}, nil
 }
+
+// eigenvalues puts the eigenvalues of bs.a in bs.vals, ascending, keeping
+// the vectors in bs.eig when mode is set. Without the mode it calls LAPACK's
+// dsyev as mat.EigenSym does (same work size, so the same values) but in
+// reused storage; bs.a is overwritten.
+func (bs *buckleScratch) eigenvalues(n int, mode bool) error {
+	bs.vals = grow(bs.vals, n)
+	if mode {
+		if !bs.eig.Factorize(bs.a, true) {
+			return errEigen
+		}
+		bs.eig.Values(bs.vals)
+		return nil
+	}
+	a := bs.a.RawSymmetric()
+	if bs.workN != n {
+		q := []float64{0}
+		lapack64.Syev(lapack.EVNone, a, bs.vals, q, -1)
+		bs.work, bs.workN = grow(bs.work, int(q[0])), n
+	}
+	if !lapack64.Syev(lapack.EVNone, a, bs.vals, bs.work, len(bs.work)) {
+		return errEigen
+	}
+	return nil
+}
+
+var errEigen = errors.New("analysis: buckling eigenproblem did not converge")
 
 // geometricStiffness returns the local geometric stiffness of member m under axial force N
 // (tension positive). Released ends follow the condensed (hinged) shape functions.

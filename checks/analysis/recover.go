@@ -14,11 +14,15 @@ func (w *Workspace) recover(cases []LoadCase) {
 	w.disp = grow(w.disp, w.nc*nd)
 	w.react = grow(w.react, w.nc*nd)
 	w.endF = grow(w.endF, w.nc*w.nm)
+	var x blas64.General
+	if w.n > 0 {
+		x = w.x.RawMatrix()
+	}
 	for c := range w.nc {
 		d := w.disp[c*nd : (c+1)*nd]
 		for i, e := range w.eq {
 			if e >= 0 && w.n > 0 {
-				d[i] = w.x.At(e, c)
+				d[i] = x.Data[e*x.Stride+c]
 			}
 		}
 		r := w.react[c*nd : (c+1)*nd]

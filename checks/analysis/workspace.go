@@ -407,7 +407,8 @@ func (w *Workspace) loadVectors(cases []LoadCase) {
 
 func (w *Workspace) addLoad(dof, c int, v float64) {
 	if j := w.eq[dof]; j >= 0 && v != 0 {
-		w.rhs.Set(j, c, w.rhs.At(j, c)+v)
+		rhs := w.rhs.RawMatrix()
+		rhs.Data[j*rhs.Stride+c] += v
 	}
 }
 
@@ -420,9 +421,16 @@ func grow[T any](s []T, n int) []T {
 	return s
 }
 
+// reuseSym returns a zero n×n symmetric matrix, in s's storage when it is
+// large enough (frames of different sizes share one workspace).
 func reuseSym(s *mat.SymDense, n int) *mat.SymDense {
-	if s == nil || s.SymmetricDim() != n {
+	switch {
+	case s == nil:
 		return mat.NewSymDense(n, nil)
+	case s.SymmetricDim() != n:
+		s.Reset()
+		s.ReuseAsSym(n) // zeroed
+		return s
 	}
 	s.Zero()
 	return s

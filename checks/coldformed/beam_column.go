@@ -45,6 +45,14 @@ func (a BeamColumnActions) validate(v *validator) {
 // compression and bending with cl. 3.5.1, or tension and bending with
 // cl. 3.5.2, plus shear (cl. 3.3.4, 3.3.5) where V > 0.
 func CheckBeamColumn(c *Capacities, m BeamColumn, a BeamColumnActions) (MemberResult, error) {
+	return CheckBeamColumnInto(make([]Check, 0, 12), c, m, a)
+}
+
+// CheckBeamColumnInto is CheckBeamColumn with the result's checks stored in
+// buf's storage (from buf[:0], growing it if needed), for callers that
+// check many segments and keep few results: the result is valid until buf
+// is reused. The checks are the same as CheckBeamColumn's.
+func CheckBeamColumnInto(buf []Check, c *Capacities, m BeamColumn, a BeamColumnActions) (MemberResult, error) {
 	r := MemberResult{Designation: c.Section.Designation}
 	var v validator
 	if !isFlexural(c.Section.Shape) {
@@ -58,7 +66,7 @@ func CheckBeamColumn(c *Capacities, m BeamColumn, a BeamColumnActions) (MemberRe
 	}
 	top := a.Mx >= 0
 	mx, my := math.Abs(a.Mx), math.Abs(a.My)
-	r.Checks = make([]Check, 0, 12)
+	r.Checks = buf[:0]
 	ltb, dist := c.ltbCheck(mx, m.Bending, top), c.distortionalCheck(mx, top)
 	r.Checks = append(r.Checks, c.sectionMomentCheck(mx, top), ltb, dist)
 	mbx := math.Min(ltb.CapacityValue, dist.CapacityValue) // φM_bx

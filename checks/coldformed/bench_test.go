@@ -38,3 +38,20 @@ func BenchmarkColumnCombined(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkColumnCombinedInto is BenchmarkColumnCombined reusing one check
+// buffer, as the frame search does: no allocation per check set.
+func BenchmarkColumnCombinedInto(b *testing.B) {
+	c := mustCaps(b, sharpC(250, 75, 18, 2.4, 5, 450, 480))
+	m := BeamColumn{Compression: EffectiveLengths{Lex: 7000, Ley: 2000, Lez: 2000}, Bending: Segment{Length: 2000, Cb: 1.3}}
+	a := BeamColumnActions{N: 40000, Mx: 8e6, My: 2e5, Cmx: 0.85, V: 6000, MomentAtShear: 8e6}
+	var buf []Check
+	b.ReportAllocs()
+	for b.Loop() {
+		r, err := CheckBeamColumnInto(buf, c, m, a)
+		if err != nil {
+			b.Fatal(err)
+		}
+		buf = r.Checks
+	}
+}

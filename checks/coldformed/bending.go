@@ -107,9 +107,9 @@ func (s Segment) lengths() (ley, lez, cb float64) {
 }
 
 func (s Segment) validate(v *validator, path string) {
-	v.positive(path+".Length", s.Length)
-	v.nonNegative(path+".K", s.K)
-	v.nonNegative(path+".Cb", s.Cb)
+	v.positiveIn(path, ".Length", s.Length)
+	v.nonNegativeIn(path, ".K", s.K)
+	v.nonNegativeIn(path, ".Cb", s.Cb)
 	if s.Cb > 2.3 {
 		v.add("%s.Cb = %g, want ≤ 2.3", path, s.Cb)
 	}

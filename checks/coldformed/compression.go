@@ -14,9 +14,9 @@ type EffectiveLengths struct {
 }
 
 func (l EffectiveLengths) validate(v *validator, path string) {
-	v.positive(path+".Lex", l.Lex)
-	v.positive(path+".Ley", l.Ley)
-	v.positive(path+".Lez", l.Lez)
+	v.positiveIn(path, ".Lex", l.Lex)
+	v.positiveIn(path, ".Ley", l.Ley)
+	v.positiveIn(path, ".Lez", l.Lez)
 }
 
 // ElasticBucklingStress is f_oc, the least elastic buckling stress in

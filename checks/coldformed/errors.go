@@ -31,17 +31,35 @@ func (v *validator) add(format string, args ...any) {
 
 // positive requires a finite value > 0.
 func (v *validator) positive(field string, x float64) {
-	if math.IsNaN(x) || math.IsInf(x, 0) || x <= 0 {
+	if !isPositive(x) {
 		v.add("%s = %g, want a finite value > 0", field, x)
+	}
+}
+
+// positiveIn is positive for the field path+field, whose name is built
+// only for a problem (checks run in inner loops).
+func (v *validator) positiveIn(path, field string, x float64) {
+	if !isPositive(x) {
+		v.positive(path+field, x)
 	}
 }
 
 // nonNegative requires a finite value ≥ 0.
 func (v *validator) nonNegative(field string, x float64) {
-	if math.IsNaN(x) || math.IsInf(x, 0) || x < 0 {
+	if !isNonNegative(x) {
 		v.add("%s = %g, want a finite value ≥ 0", field, x)
 	}
 }
+
+// nonNegativeIn is nonNegative for the field path+field (see positiveIn).
+func (v *validator) nonNegativeIn(path, field string, x float64) {
+	if !isNonNegative(x) {
+		v.nonNegative(path+field, x)
+	}
+}
+
+func isPositive(x float64) bool    { return !math.IsNaN(x) && !math.IsInf(x, 0) && x > 0 }
+func isNonNegative(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) && x >= 0 }
 
 // finite requires a finite value.
 func (v *validator) finite(field string, x float64) {
