@@ -98,7 +98,7 @@ func (s *sweepRun) design(ctx context.Context, w *dataset.Writer, stderr io.Writ
 	if !s.flags.quiet && isTerminal(stderr) {
 		prog = newProgress(stderr, total, w.Rows(), time.Now)
 	}
-	todo, err := remaining(s.grid.ShardCases(s.shard), w.Rows(), w.Done)
+	todo, err := remaining(s.grid, s.shard, w)
 	if err != nil {
 		w.Abort()
 		return stats, err
@@ -143,28 +143,38 @@ func (s *sweepRun) stopped(ctx context.Context, w *dataset.Writer, total int, ca
 		rows, total, s.shard, partial)
 }
 
-// remaining skips the first done cases, which a resumed part holds (an
-// interrupted run keeps an unbroken prefix of its shard, in case order), and
-// yields the rest. It checks the prefix against isDone before the run, so
-// the writer is not read while the engine writes to it.
-func remaining(cases iter.Seq[grids.Case], done int, isDone func(caseID string) bool) (iter.Seq[grids.Case], error) {
-	i := 0
-	for c := range cases {
-		if i == done {
-			if isDone(c.ID) {
-				return nil, fmt.Errorf("resume: case %s (index %d) is in the dataset part but after its first %d cases; the part is not a prefix of the shard", c.ID, c.Index, done)
-			}
-			break
+// keptRows is what a resumed dataset part holds, as *dataset.Writer tells it.
+type keptRows interface {
+	Rows() int
+	FirstIndex() int
+	LastIndex() int
+	LastCaseID() string
+}
+
+// remaining yields the shard's cases after those the resumed part keeps. An
+// interrupted run keeps an unbroken prefix of its shard, in case order, and
+// the writer takes rows only in strictly ascending case_index, so the part
+// is that prefix exactly when its first and last indices are the shard's
+// first and its rows-th; the last case's id must also be the grid's. The
+// check reads four numbers, not a record per case, so resuming a large
+// shard costs no memory.
+func remaining(g *grids.Grid, sh grids.Shard, kept keptRows) (iter.Seq[grids.Case], error) {
+	lo, hi := sh.Range(g.Count())
+	done := kept.Rows()
+	if done > 0 {
+		first, last := kept.FirstIndex(), kept.LastIndex()
+		if first != lo || last != lo+done-1 || last >= hi {
+			return nil, fmt.Errorf("resume: the dataset part holds %d cases with case_index %d to %d; shard %s has cases %d to %d, so the part is not a prefix of the shard",
+				done, first, last, sh, lo, hi-1)
 		}
-		if !isDone(c.ID) {
-			return nil, fmt.Errorf("resume: case %s (index %d) is missing from the first %d cases of the dataset part; the part is not a prefix of the shard", c.ID, c.Index, done)
+		if want := g.Case(last).ID; kept.LastCaseID() != want {
+			return nil, fmt.Errorf("resume: the dataset part's last case (index %d) is %s, but the grid's case %d is %s; the part is not a prefix of the shard",
+				last, kept.LastCaseID(), last, want)
 		}
-		i++
 	}
 	return func(yield func(grids.Case) bool) {
-		i := 0
-		for c := range cases {
-			if i++; i > done && !yield(c) {
+		for i := lo + done; i < hi; i++ {
+			if !yield(g.Case(i)) {
 				return
 			}
 		}

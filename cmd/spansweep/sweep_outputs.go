@@ -8,27 +8,53 @@ import (
 	"path/filepath"
 	"slices"
 
-	"github.com/spansweep/spansweep/grids"
 	"github.com/spansweep/spansweep/optimize"
 	"github.com/spansweep/spansweep/outputs/plots"
 	"github.com/spansweep/spansweep/outputs/tables"
 )
 
-// derived gathers what is made from the dataset's results: the counts and,
-// for a run over the whole grid, the span tables and the plot points.
+// derived gathers what is made from the dataset's results as they stream
+// past in case order: the counts and, for a run over the whole grid, the
+// span tables and the charts. None of it grows with the number of cases:
+// the tables hold one wind condition and eaves height at a time and spool
+// the rest to a file, and the charts keep per-span and per-cell figures
+// (and one wind condition's values for its trend fit).
 type derived struct {
 	cases, ok, noSolution int
-	acc                   *tables.Accumulator // nil: no tables
-	col                   *plots.Collector
+	tab                   *tables.Stream // nil: no tables
+	mass                  []massChart
+	gov                   *plots.GoverningChart
 }
 
-func (s *sweepRun) newDerived(withTables bool) *derived {
+// massChart is one mass plot being built, and what it is written as.
+type massChart struct {
+	name, quantity string
+	chart          *plots.MassChart
+}
+
+func (s *sweepRun) newDerived(withTables bool) (*derived, error) {
 	d := &derived{}
-	if withTables {
-		d.acc = tables.NewAccumulator(tables.Options{Envelope: s.flags.envelope, KgPerM: s.kgPerM})
-		d.col = plots.NewCollector(nil)
+	if !withTables {
+		return d, nil
 	}
-	return d
+	// The spool sits in the output directory, beside what it becomes, not
+	// in a temporary directory that may be held in memory.
+	tab, err := tables.NewStream(tables.Options{Envelope: s.flags.envelope, KgPerM: s.kgPerM}, s.layout.root)
+	if err != nil {
+		return nil, err
+	}
+	d.tab = tab
+	eaves, length := s.referenceSize()
+	d.mass = []massChart{
+		{plotMass, "steel_mass_kg", plots.NewMassChart(nil, plots.MassPlot{Select: plots.AtSize(eaves, length),
+			Title: fmt.Sprintf("Total steel mass against span (eaves height %g m, length %g m)", eaves, length)})},
+		{plotMassArea, "mass_per_floor_kg_m2", plots.NewMassChart(nil, plots.MassPlot{PerFloorArea: true})},
+	}
+	if d.gov, err = plots.NewGoverningChart(nil, plots.GoverningMap{}); err != nil {
+		tab.Close()
+		return nil, err
+	}
+	return d, nil
 }
 
 func (s *sweepRun) kgPerM(designation string) (float64, bool) {
@@ -43,11 +69,24 @@ func (d *derived) add(r *optimize.Result) error {
 	} else {
 		d.noSolution++
 	}
-	if d.acc == nil {
+	if d.tab == nil {
 		return nil
 	}
-	d.col.Add(r)
-	return d.acc.Add(r)
+	for _, m := range d.mass {
+		if err := m.chart.Add(r); err != nil {
+			return err
+		}
+	}
+	d.gov.Add(r)
+	return d.tab.Add(r)
+}
+
+// close removes the tables' spool.
+func (d *derived) close() error {
+	if d.tab == nil {
+		return nil
+	}
+	return d.tab.Close()
 }
 
 // Files of the tables and plots directories.
@@ -62,7 +101,7 @@ const (
 
 // writeTables writes the span tables as CSV, Markdown and a printable HTML
 // page and returns their paths.
-func (s *sweepRun) writeTables(set *tables.Set) ([]string, error) {
+func (s *sweepRun) writeTables(set *tables.Stream) ([]string, error) {
 	a := s.assumptions()
 	files := []struct {
 		name  string
@@ -132,19 +171,10 @@ type plotSet struct {
 
 // writePlots writes the mass plots (total mass at a reference size, and mass
 // per floor area over every size) and the governing-check map.
-func (s *sweepRun) writePlots(col *plots.Collector) (plotSet, error) {
+func (s *sweepRun) writePlots(d *derived) (plotSet, error) {
 	var ps plotSet
-	eaves, length := s.referenceSize()
-	massPlots := []struct {
-		name, quantity string
-		plot           plots.MassPlot
-	}{
-		{plotMass, "steel_mass_kg", plots.MassPlot{Select: plots.AtSize(eaves, length),
-			Title: fmt.Sprintf("Total steel mass against span (eaves height %g m, length %g m)", eaves, length)}},
-		{plotMassArea, "mass_per_floor_kg_m2", plots.MassPlot{PerFloorArea: true}},
-	}
-	for _, mp := range massPlots {
-		if !anySolved(col, mp.plot.Select) {
+	for _, mp := range d.mass {
+		if mp.chart.Solved() == 0 {
 			ps.notes = append(ps.notes, fmt.Sprintf("%s not drawn: no solved case to plot", mp.name))
 			continue
 		}
@@ -152,7 +182,7 @@ func (s *sweepRun) writePlots(col *plots.Collector) (plotSet, error) {
 		path := filepath.Join(s.layout.plotsDir(), mp.name)
 		err := writeAtomic(path, func(w io.Writer) error {
 			var err error
-			fits, err = col.MassAgainstSpan(w, mp.plot)
+			fits, err = mp.chart.WriteSVG(w)
 			return err
 		})
 		if err != nil {
@@ -163,7 +193,7 @@ func (s *sweepRun) writePlots(col *plots.Collector) (plotSet, error) {
 	}
 	path := filepath.Join(s.layout.plotsDir(), plotGoverning)
 	err := writeAtomic(path, func(w io.Writer) error {
-		_, err := col.GoverningCheckMap(w, plots.GoverningMap{})
+		_, err := d.gov.WriteSVG(w)
 		return err
 	})
 	if err != nil {
@@ -183,15 +213,6 @@ func (s *sweepRun) referenceSize() (eavesHeightM, lengthM float64) {
 	slices.Sort(lengths)
 	lengths = slices.Compact(lengths)
 	return slices.Min(s.grid.EavesHeightsM), lengths[len(lengths)/2]
-}
-
-func anySolved(col *plots.Collector, sel func(grids.Case) bool) bool {
-	for _, p := range col.Points() {
-		if p.Solved && (sel == nil || sel(p.Case)) {
-			return true
-		}
-	}
-	return false
 }
 
 // writeAtomic writes a file through a temporary name in its directory

@@ -97,17 +97,21 @@ func (s *sweepRun) derive(withTables bool, stats runStats, start time.Time, file
 	}
 	defer d.Close()
 	lo, hi := s.shard.Range(s.grid.Count())
-	got := s.newDerived(withTables)
+	got, err := s.newDerived(withTables)
+	if err != nil {
+		return err
+	}
+	defer got.close()
 	if err := s.eachResult(d, lo, hi, got.add); err != nil {
 		return err
 	}
 	var trends []trendJSON
 	if withTables {
-		paths, err := s.writeTables(got.acc.Set())
+		paths, err := s.writeTables(got.tab)
 		if err != nil {
 			return err
 		}
-		ps, err := s.writePlots(got.col)
+		ps, err := s.writePlots(got)
 		if err != nil {
 			return err
 		}

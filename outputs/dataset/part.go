@@ -29,7 +29,10 @@ func openPart(path string) (*part, error) {
 		f.Close()
 		return nil, fmt.Errorf("dataset: %w", err)
 	}
-	pf, err := parquet.OpenFile(f, st.Size())
+	// Scans read rows in order and skip row groups by the column chunks'
+	// statistics in the footer, so the page indexes and bloom filters are
+	// not read: held for every row group, they would grow with the part.
+	pf, err := parquet.OpenFile(f, st.Size(), parquet.SkipPageIndex(true), parquet.SkipBloomFilters(true))
 	if err != nil {
 		f.Close()
 		return nil, fmt.Errorf("dataset: %s: not a readable Parquet file: %w", path, err)

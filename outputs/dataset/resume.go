@@ -14,8 +14,9 @@ var ErrNothingToResume = errors.New("dataset: nothing to resume")
 // Resume continues an interrupted run of meta.Shard in dir. It reads the
 // partial part (or, if the shard already finished, the complete part),
 // checks that its grid and catalogue hashes, program version and shard match
-// meta, and returns a Writer that already holds its rows: the caller skips
-// the cases for which Done is true and writes the rest in order. On a
+// meta, and returns a Writer that already holds its rows: the caller checks
+// them against its cases (Rows, FirstIndex, LastIndex, LastCaseID), skips
+// them and writes the rest in order. On a
 // mismatch it returns a *MismatchError and leaves every file as it was.
 func Resume(dir string, meta Meta) (*Writer, error) {
 	if err := meta.Shard.validate(); err != nil {

@@ -18,16 +18,28 @@ const RowGroupRows = 4096
 // enumeration order (case_index strictly ascending). Nothing appears under
 // the final name until Close succeeds. A Writer is not safe for concurrent
 // use: the engine's ordered output feeds it from one goroutine.
+//
+// Memory: each row goes straight to the Parquet writer, which holds the
+// current row group's columns; the Writer keeps no rows and no record per
+// case. What still grows is the footer the Parquet writer keeps until
+// Close: the metadata and page indexes of every row group (some tens of
+// bytes a row at RowGroupRows 4096 and 201 columns; larger row groups
+// would shrink it, at the cost of coarser skipping).
 type Writer struct {
-	dir       string
-	meta      Meta
-	tmp       *os.File
-	pw        *parquet.Writer
-	batch     []parquet.Row
-	rows      int
-	lastIndex int
-	done      map[string]bool
-	closed    bool
+	dir     string
+	meta    Meta
+	tmp     *os.File
+	pw      *parquet.Writer
+	one     [1]parquet.Row // the row being written; its buffer is reused
+	pending int            // rows written since the last row group
+	rows    int
+	// The case_index of the first and last rows and the last row's id:
+	// rows come in strictly ascending case_index, so these describe what
+	// the part holds without a record per case (memory stays flat however
+	// many rows a part gets).
+	firstIndex, lastIndex int
+	lastID                string
+	closed                bool
 }
 
 // Create starts a new part for meta.Shard in dir, creating dir if needed. A
@@ -46,7 +58,7 @@ func Create(dir string, meta Meta) (*Writer, error) {
 	if err != nil {
 		return nil, fmt.Errorf("dataset: create part: %w", err)
 	}
-	w := &Writer{dir: dir, meta: meta, tmp: f, lastIndex: -1, done: map[string]bool{}}
+	w := &Writer{dir: dir, meta: meta, tmp: f, firstIndex: -1, lastIndex: -1}
 	w.pw = parquet.NewWriter(f, schema,
 		parquet.Compression(&snappy.Codec{}),
 		parquet.DataPageStatistics(true),
@@ -68,9 +80,18 @@ func (w *Writer) Path() string { return filepath.Join(w.dir, partName(w.meta.Sha
 // Rows returns the number of rows written so far, resumed ones included.
 func (w *Writer) Rows() int { return w.rows }
 
-// Done reports whether the case with this id is already in the part (after
-// Resume, the cases of the interrupted run).
-func (w *Writer) Done(caseID string) bool { return w.done[caseID] }
+// FirstIndex returns the case_index of the first row written, resumed ones
+// included; -1 before any row.
+func (w *Writer) FirstIndex() int { return w.firstIndex }
+
+// LastIndex returns the case_index of the last row written; -1 before any
+// row. Rows come in strictly ascending case_index, so after Resume the part
+// holds an unbroken run of cases exactly when LastIndex − FirstIndex + 1
+// equals Rows.
+func (w *Writer) LastIndex() int { return w.lastIndex }
+
+// LastCaseID returns the case_id of the last row written; "" before any row.
+func (w *Writer) LastCaseID() string { return w.lastID }
 
 // Write appends one row. Its provenance columns are set from the Writer's
 // Meta.
@@ -81,29 +102,29 @@ func (w *Writer) Write(r Row) error {
 	if r.CaseIndex <= w.lastIndex {
 		return fmt.Errorf("dataset: case %s: case_index %d after %d; rows must come in enumeration order", r.CaseID, r.CaseIndex, w.lastIndex)
 	}
-	if w.done[r.CaseID] {
-		return fmt.Errorf("dataset: case %s written twice", r.CaseID)
-	}
 	r.GridSHA256, r.CatalogSHA256, r.ProgramVersion = w.meta.GridSHA256, w.meta.CatalogSHA256, w.meta.ProgramVersion
-	w.batch = append(w.batch, encode(nil, &r))
-	w.lastIndex = r.CaseIndex
-	w.done[r.CaseID] = true
+	w.one[0] = encode(w.one[0][:0], &r)
+	if _, err := w.pw.WriteRows(w.one[:]); err != nil {
+		return fmt.Errorf("dataset: write rows: %w", err)
+	}
+	w.pending++
+	if w.rows == 0 {
+		w.firstIndex = r.CaseIndex
+	}
+	w.lastIndex, w.lastID = r.CaseIndex, r.CaseID
 	w.rows++
-	if len(w.batch) == RowGroupRows {
+	if w.pending == RowGroupRows {
 		return w.flush()
 	}
 	return nil
 }
 
-// flush writes the batch as one row group.
+// flush ends the row group of the rows written since the last one.
 func (w *Writer) flush() error {
-	if len(w.batch) == 0 {
+	if w.pending == 0 {
 		return nil
 	}
-	if _, err := w.pw.WriteRows(w.batch); err != nil {
-		return fmt.Errorf("dataset: write rows: %w", err)
-	}
-	w.batch = w.batch[:0]
+	w.pending = 0
 	if err := w.pw.Flush(); err != nil {
 		return fmt.Errorf("dataset: flush row group: %w", err)
 	}

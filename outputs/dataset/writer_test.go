@@ -160,9 +160,16 @@ func TestResumeEqualsUninterrupted(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
+	// The kept rows are the unbroken prefix 0 … RowGroupRows+122 of the
+	// results (interrupt wrote exactly those).
+	kept := RowGroupRows + 123
+	if w.Rows() != kept || w.FirstIndex() != 0 || w.LastIndex() != kept-1 || w.LastCaseID() != results[kept-1].Case.ID {
+		t.Fatalf("resumed writer: got rows %d, case_index %d to %d, last id %q; want %d, 0 to %d, %q",
+			w.Rows(), w.FirstIndex(), w.LastIndex(), w.LastCaseID(), kept, kept-1, results[kept-1].Case.ID)
+	}
 	skipped := 0
 	for _, r := range results {
-		if w.Done(r.Case.ID) {
+		if r.Case.Index <= w.LastIndex() {
 			skipped++
 			continue
 		}

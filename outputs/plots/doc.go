@@ -6,6 +6,11 @@
 // mass = A·span^B, so A is in kg/m^B (kg/m²/m^B for mass per floor area)
 // and B is dimensionless.
 //
+// A Collector keeps a small point per case and draws any chart afterwards;
+// a MassChart or GoverningChart is configured first and built as results
+// arrive, in memory bounded by wind conditions, spans and map cells rather
+// than cases, and draws the same bytes.
+//
 // The SVG is written by hand, element by element, with every text and
 // attribute value XML-escaped, and numbers at fixed precision, so the same
 // results give byte-identical files. Colours are this package's own.

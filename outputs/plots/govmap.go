@@ -51,101 +51,131 @@ type mapCell struct {
 	caseID   string
 }
 
-// GoverningCheckMap writes a grid of span (columns) against wind condition
-// or length (rows), each cell coloured by its governing check. Where
-// several cases fall on one cell (other dimensions vary), the cell shows
-// an unsolved case if there is one, else the heaviest. It returns the
-// legend's categories, most frequent first.
-func (c *Collector) GoverningCheckMap(w io.Writer, m GoverningMap) ([]Category, error) {
+// GoverningChart builds the governing-check map as results arrive, in any
+// order, keeping one representative case per map cell (row × span), so its
+// memory is bounded by the cells, not the cases.
+type GoverningChart struct {
+	m         GoverningMap
+	windLabel func(grids.Case) string
+	seen      int                // results added
+	selected  int                // results the map shows
+	rowFirst  map[string]int     // RowsWind: lowest case index per wind condition
+	lengths   map[float64]bool   // RowsLength: the lengths
+	spans     map[float64]bool   // the columns
+	best      map[cellKey]*Point // each cell's representative
+}
+
+// cellKey is a map cell: a wind condition (RowsWind) or a length
+// (RowsLength), and a span.
+type cellKey struct {
+	wind           string
+	lengthM, spanM float64
+}
+
+// NewGoverningChart returns an empty map configured by m. windLabel names
+// a case's wind condition; nil means the case's own label.
+func NewGoverningChart(windLabel func(grids.Case) string, m GoverningMap) (*GoverningChart, error) {
 	if m.Rows != RowsWind && m.Rows != RowsLength {
 		return nil, fmt.Errorf("plots: governing map: rows %d: want RowsWind (0) or RowsLength (1)", m.Rows)
 	}
 	if m.Role != "" && roleIndex(m.Role) < 0 {
 		return nil, fmt.Errorf("plots: governing map: role %q: want one of %v or empty", m.Role, optimize.Roles)
 	}
-	var pts []Point
-	for _, p := range c.points {
-		if m.Select == nil || m.Select(p.Case) {
-			pts = append(pts, p)
+	return &GoverningChart{m: m, windLabel: orWindCondition(windLabel), rowFirst: map[string]int{},
+		lengths: map[float64]bool{}, spans: map[float64]bool{}, best: map[cellKey]*Point{}}, nil
+}
+
+// Add takes one result.
+func (g *GoverningChart) Add(r *optimize.Result) {
+	p := pointOf(r, g.windLabel)
+	g.add(&p)
+}
+
+func (g *GoverningChart) add(p *Point) {
+	g.seen++
+	if g.m.Select != nil && !g.m.Select(p.Case) {
+		return
+	}
+	g.selected++
+	k := cellKey{spanM: p.Case.SpanM}
+	if g.m.Rows == RowsWind {
+		k.wind = p.Wind
+		if f, ok := g.rowFirst[p.Wind]; !ok || p.Case.Index < f {
+			g.rowFirst[p.Wind] = p.Case.Index
 		}
+	} else {
+		k.lengthM = p.Case.LengthM
+		g.lengths[p.Case.LengthM] = true
 	}
-	if len(pts) == 0 {
-		return nil, fmt.Errorf("plots: governing map: no case selected (of %d collected)", len(c.points))
+	g.spans[p.Case.SpanM] = true
+	if b := g.best[k]; b == nil || representsBetter(p, b) {
+		cp := *p
+		g.best[k] = &cp
 	}
-	rows, rowOf := mapRows(pts, m.Rows)
-	spans := make([]float64, len(pts))
-	for i, p := range pts {
-		spans[i] = p.Case.SpanM
+}
+
+// WriteSVG writes a grid of span (columns) against wind condition or
+// length (rows), each cell coloured by its governing check. Where several
+// cases fall on one cell (other dimensions vary), the cell shows an
+// unsolved case if there is one, else the heaviest. It returns the
+// legend's categories, most frequent first.
+func (g *GoverningChart) WriteSVG(w io.Writer) ([]Category, error) {
+	if g.selected == 0 {
+		return nil, fmt.Errorf("plots: governing map: no case selected (of %d collected)", g.seen)
 	}
-	cols := sortedFloats(spans)
-	cells := pickCells(pts, rowOf, cols, m.Role)
+	rows, rowOf := g.rows()
+	cols := sortedKeys(g.spans)
+	cells := make([]mapCell, 0, len(g.best))
+	for k, p := range g.best {
+		check := labelNoSolution
+		if p.Solved {
+			if check = p.governing(g.m.Role); check == "" {
+				check = labelUnknown
+			}
+		}
+		cells = append(cells, mapCell{row: rowOf(k), col: sort.SearchFloat64s(cols, k.spanM), check: check, caseID: p.Case.ID})
+	}
+	sort.Slice(cells, func(i, j int) bool {
+		if cells[i].row != cells[j].row {
+			return cells[i].row < cells[j].row
+		}
+		return cells[i].col < cells[j].col
+	})
 	cats, colourOf := categories(cells)
 	title := "Governing check of the heaviest member group"
-	if m.Role != "" {
-		title = "Governing check of the " + string(m.Role) + " group"
+	if g.m.Role != "" {
+		title = "Governing check of the " + string(g.m.Role) + " group"
 	}
-	if m.Title != "" {
-		title = m.Title
+	if g.m.Title != "" {
+		title = g.m.Title
 	}
-	if err := drawMap(w, title, rows, cols, cells, cats, colourOf, m.Rows); err != nil {
+	if err := drawMap(w, title, rows, cols, cells, cats, colourOf, g.m.Rows); err != nil {
 		return nil, fmt.Errorf("plots: governing map: %w", err)
 	}
 	return cats, nil
 }
 
-// mapRows returns the row labels and each point's row.
-func mapRows(pts []Point, rows MapRows) ([]string, func(Point) int) {
-	if rows == RowsWind {
-		labels := windOrder(pts)
+// rows returns the row labels and each cell's row: wind conditions in the
+// grid's order, or lengths ascending.
+func (g *GoverningChart) rows() ([]string, func(cellKey) int) {
+	if g.m.Rows == RowsWind {
+		labels := keysByValue(g.rowFirst)
 		idx := map[string]int{}
 		for i, l := range labels {
 			idx[l] = i
 		}
-		return labels, func(p Point) int { return idx[p.Wind] }
+		return labels, func(k cellKey) int { return idx[k.wind] }
 	}
-	lengths := make([]float64, len(pts))
-	for i, p := range pts {
-		lengths[i] = p.Case.LengthM
-	}
-	vals := sortedFloats(lengths)
+	vals := sortedKeys(g.lengths)
 	labels := make([]string, len(vals))
 	for i, v := range vals {
 		labels[i] = tickLabel(v) + " m"
 	}
-	return labels, func(p Point) int { return sort.SearchFloat64s(vals, p.Case.LengthM) }
+	return labels, func(k cellKey) int { return sort.SearchFloat64s(vals, k.lengthM) }
 }
 
-// pickCells chooses each cell's representative: unsolved first, then the
+// representsBetter orders a cell's cases: unsolved first, then the
 // heaviest, then the lowest case index.
-func pickCells(pts []Point, rowOf func(Point) int, cols []float64, role optimize.Role) []mapCell {
-	type pos struct{ r, c int }
-	best := map[pos]*Point{}
-	for i := range pts {
-		p := &pts[i]
-		k := pos{rowOf(*p), sort.SearchFloat64s(cols, p.Case.SpanM)}
-		if b := best[k]; b == nil || representsBetter(p, b) {
-			best[k] = p
-		}
-	}
-	out := make([]mapCell, 0, len(best))
-	for k, p := range best {
-		check := labelNoSolution
-		if p.Solved {
-			if check = p.governing(role); check == "" {
-				check = labelUnknown
-			}
-		}
-		out = append(out, mapCell{row: k.r, col: k.c, check: check, caseID: p.Case.ID})
-	}
-	sort.Slice(out, func(i, j int) bool {
-		if out[i].row != out[j].row {
-			return out[i].row < out[j].row
-		}
-		return out[i].col < out[j].col
-	})
-	return out
-}
-
 func representsBetter(p, b *Point) bool {
 	if p.Solved != b.Solved {
 		return !p.Solved

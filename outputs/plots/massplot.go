@@ -9,7 +9,8 @@ import (
 	"github.com/spansweep/spansweep/grids"
 )
 
-// MassPlot configures MassAgainstSpan; the zero value plots the total
+// MassPlot configures a mass chart (MassChart, Collector.MassAgainstSpan);
+// the zero value plots the total
 // steel mass of every solved case.
 type MassPlot struct {
 	// Select keeps the cases to plot; nil keeps all. Total mass mixes
@@ -30,34 +31,33 @@ type WindFit struct {
 	Fit    *PowerFit
 }
 
-// series is one wind condition's plotted data.
+// series is one wind condition's line as drawn.
 type series struct {
 	wind         string
-	spans, vals  []float64 // every case
+	points       int       // solved cases plotted
 	meanX, meanY []float64 // mean per span, ascending span
 	fit          *PowerFit
 }
 
-// MassAgainstSpan writes the chart: one line per wind condition through
-// the mean value at each span, and that condition's trend value = A·span^B
-// fitted to every plotted case. It returns the trends in legend order
-// (the grid's order of wind conditions). Unsolved cases are left out.
-func (c *Collector) MassAgainstSpan(w io.Writer, p MassPlot) ([]WindFit, error) {
-	all, err := c.massSeries(p)
+// WriteSVG writes the chart: one line per wind condition through the mean
+// value at each span, and that condition's trend value = A·span^B fitted to
+// every plotted case. It returns the trends in legend order (the grid's
+// order of wind conditions). Unsolved cases are left out. It ends the
+// chart: it takes no more results.
+func (m *MassChart) WriteSVG(w io.Writer) ([]WindFit, error) {
+	all, err := m.lines()
 	if err != nil {
 		return nil, err
 	}
 	fits := make([]WindFit, len(all))
-	var xs, ys []float64
 	for i := range all {
-		fits[i] = WindFit{Wind: all[i].wind, Points: len(all[i].vals), Fit: all[i].fit}
-		xs = append(xs, all[i].spans...)
-		ys = append(ys, all[i].vals...)
+		fits[i] = WindFit{Wind: all[i].wind, Points: all[i].points, Fit: all[i].fit}
 	}
 	ch := massChart
 	// The legend runs down the right; a long one makes the page taller.
 	ch.height = math.Max(ch.height, ch.top+34+32*float64(len(all))+60)
-	ax := axes{c: ch, xTicks: niceTicks(minOf(xs), maxOf(xs), 6), yTicks: niceTicks(0, maxOf(ys), 6)}
+	ax := axes{c: ch, xTicks: niceTicks(m.minSpanM, m.maxSpanM, 6), yTicks: niceTicks(0, m.maxValue, 6)}
+	p := m.plot
 	title, yTitle := "Total steel mass against span", "Total steel mass (kg)"
 	if p.PerFloorArea {
 		title, yTitle = "Steel mass per floor area against span", "Steel mass per floor area (kg/m²)"
@@ -76,60 +76,6 @@ func (c *Collector) MassAgainstSpan(w io.Writer, p MassPlot) ([]WindFit, error) 
 		return nil, fmt.Errorf("plots: mass against span: %w", err)
 	}
 	return fits, nil
-}
-
-func (c *Collector) massSeries(p MassPlot) ([]series, error) {
-	var pts []Point
-	for _, pt := range c.points {
-		if pt.Solved && (p.Select == nil || p.Select(pt.Case)) {
-			pts = append(pts, pt)
-		}
-	}
-	if len(pts) == 0 {
-		return nil, fmt.Errorf("plots: mass against span: no solved case selected (of %d collected)", len(c.points))
-	}
-	var out []series
-	for _, wind := range windOrder(pts) {
-		sr := series{wind: wind}
-		for _, pt := range pts {
-			if pt.Wind != wind {
-				continue
-			}
-			v := pt.SteelMassKg
-			if p.PerFloorArea {
-				v = pt.MassPerFloorKgM2
-			}
-			sr.spans, sr.vals = append(sr.spans, pt.Case.SpanM), append(sr.vals, v)
-		}
-		sr.meanX, sr.meanY = meansBySpan(sr.spans, sr.vals)
-		if len(sr.meanX) >= 2 {
-			f, err := FitPower(sr.spans, sr.vals)
-			if err != nil {
-				return nil, fmt.Errorf("plots: mass against span: wind %s: %w", wind, err)
-			}
-			sr.fit = &f
-		}
-		out = append(out, sr)
-	}
-	return out, nil
-}
-
-// meansBySpan averages vals at each distinct span, in ascending span.
-func meansBySpan(spans, vals []float64) (xs, ys []float64) {
-	xs = sortedFloats(spans)
-	ys = make([]float64, len(xs))
-	for k, x := range xs {
-		var sum float64
-		var n int
-		for i := range spans {
-			if spans[i] == x {
-				sum += vals[i]
-				n++
-			}
-		}
-		ys[k] = sum / float64(n)
-	}
-	return xs, ys
 }
 
 // drawSeries writes the condition's data line (the one path per
@@ -193,19 +139,3 @@ func drawMassLegend(s *svg, ch chart, all []series, perArea bool) {
 
 // sig4 writes v to four significant figures.
 func sig4(v float64) string { return strings.TrimSuffix(fmt.Sprintf("%.4g", v), ".") }
-
-func minOf(xs []float64) float64 {
-	m := math.Inf(1)
-	for _, x := range xs {
-		m = math.Min(m, x)
-	}
-	return m
-}
-
-func maxOf(xs []float64) float64 {
-	m := math.Inf(-1)
-	for _, x := range xs {
-		m = math.Max(m, x)
-	}
-	return m
-}

@@ -17,15 +17,11 @@ func keysByValue(m map[string]int) []string {
 	return keys
 }
 
-// sortedFloats returns the distinct values of xs, ascending.
-func sortedFloats(xs []float64) []float64 {
-	seen := map[float64]bool{}
-	var out []float64
-	for _, x := range xs {
-		if !seen[x] {
-			seen[x] = true
-			out = append(out, x)
-		}
+// sortedKeys returns the keys of a set of values, ascending.
+func sortedKeys(set map[float64]bool) []float64 {
+	out := make([]float64, 0, len(set))
+	for x := range set {
+		out = append(out, x)
 	}
 	sort.Float64s(out)
 	return out

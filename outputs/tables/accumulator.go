@@ -22,8 +22,9 @@ type Options struct {
 	WindLabel func(grids.Case) string
 }
 
-// Accumulator collects results into span tables as they stream in. It
-// keeps one small Cell per case and nothing else of the results.
+// Accumulator collects results, in any order, into span tables. It keeps
+// one small Cell per case and nothing else of the results; a Stream, which
+// takes results in grid order, keeps only the tables being filled.
 type Accumulator struct {
 	opt       Options
 	tables    map[Key]map[position]*Cell
@@ -94,26 +95,41 @@ func checkDimensions(c grids.Case) error {
 // rows by span and columns by length. With Options.Envelope the sections
 // are enveloped. The accumulator is unchanged and may take more results.
 func (a *Accumulator) Set() *Set {
-	s := &Set{Enveloped: a.opt.Envelope}
+	s := &Set{Tables: a.build(), Enveloped: a.opt.Envelope}
+	s.noteVarying()
+	return s
+}
+
+// build lays out (and envelopes) every table, in Set order.
+func (a *Accumulator) build() []Table {
+	out := make([]Table, 0, len(a.tables))
 	for key, cells := range a.tables {
 		t := buildTable(key, cells)
 		if a.opt.Envelope {
 			Envelope(&t)
 		}
-		s.Tables = append(s.Tables, t)
+		out = append(out, t)
 	}
-	sort.Slice(s.Tables, func(i, j int) bool {
-		return a.keyLess(s.Tables[i].Key, s.Tables[j].Key)
-	})
-	s.noteVarying()
-	return s
+	sort.Slice(out, func(i, j int) bool { return keyLess(a.windFirst, out[i].Key, out[j].Key) })
+	return out
 }
 
-func (a *Accumulator) keyLess(k, o Key) bool {
+// cells counts the cells the accumulator holds.
+func (a *Accumulator) cells() int {
+	n := 0
+	for _, cells := range a.tables {
+		n += len(cells)
+	}
+	return n
+}
+
+// keyLess orders tables by wind condition (lowest case index first, from
+// windFirst), then eaves height, pitch, base and hoist.
+func keyLess(windFirst map[string]int, k, o Key) bool {
 	switch {
 	case k.Wind != o.Wind:
-		if a.windFirst[k.Wind] != a.windFirst[o.Wind] {
-			return a.windFirst[k.Wind] < a.windFirst[o.Wind]
+		if windFirst[k.Wind] != windFirst[o.Wind] {
+			return windFirst[k.Wind] < windFirst[o.Wind]
 		}
 		return k.Wind < o.Wind
 	case k.EavesHeightM != o.EavesHeightM:

@@ -1,8 +1,6 @@
 package tables
 
 import (
-	"encoding/csv"
-	"fmt"
 	"io"
 	"strconv"
 )
@@ -20,30 +18,7 @@ var CSVHeader = []string{
 // WriteCSV writes every table as one long CSV (header CSVHeader), tables
 // in Set order, rows by span, then columns by length. Analysts filter on
 // the key columns; a spreadsheet pivots span against length.
-func (s *Set) WriteCSV(w io.Writer) error {
-	cw := csv.NewWriter(w)
-	if err := cw.Write(CSVHeader); err != nil {
-		return fmt.Errorf("span tables: csv: %w", err)
-	}
-	for ti := range s.Tables {
-		t := &s.Tables[ti]
-		for i, row := range t.Cells {
-			for j, c := range row {
-				if c == nil {
-					continue
-				}
-				if err := cw.Write(csvRecord(t, t.SpansM[i], t.Columns[j], c)); err != nil {
-					return fmt.Errorf("span tables: csv: %w", err)
-				}
-			}
-		}
-	}
-	cw.Flush()
-	if err := cw.Error(); err != nil {
-		return fmt.Errorf("span tables: csv: %w", err)
-	}
-	return nil
-}
+func (s *Set) WriteCSV(w io.Writer) error { return writeCSVPage(w, s.bodies()) }
 
 func csvRecord(t *Table, spanM float64, col Column, c *Cell) []string {
 	k := t.Key

@@ -9,8 +9,11 @@
 // hoist loads, kg for mass and kg/m for mass per metre of a section. Every
 // field carries its unit in its name.
 //
-// An Accumulator takes results as they stream from the engine and keeps
-// only the cells (a few strings and numbers per case). Output is
+// An Accumulator takes results in any order and keeps only the cells (a
+// few strings and numbers per case). A Stream takes them in grid order
+// (grouped by wind condition and eaves height) and holds one group's cells
+// at a time, spooling finished tables to a file, so a sweep of any size
+// writes its tables in flat memory; both write the same bytes. Output is
 // deterministic: the same results give byte-identical files, and the order
 // of tables, rows and columns depends on the cases, not on arrival order.
 //

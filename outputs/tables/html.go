@@ -2,7 +2,6 @@ package tables
 
 import (
 	_ "embed"
-	"fmt"
 	"html/template"
 	"io"
 
@@ -23,9 +22,9 @@ var pageSource string
 
 var pageTemplate = template.Must(template.New("page").Parse(pageSource))
 
-// htmlTable is one table as the template reads it.
+// htmlTable is one table's body as the template reads it; the title is
+// written separately (table-title), as only the whole set knows it.
 type htmlTable struct {
-	Title   string
 	Columns []string
 	Rows    []htmlRow
 	Notes   []note
@@ -45,35 +44,12 @@ type htmlCell struct {
 // table per wind condition and height, and the caution again. paper is
 // A4 or A3; an empty paper means A4.
 func (s *Set) WriteHTML(w io.Writer, a Assumptions, paper Paper) error {
-	if paper == "" {
-		paper = A4
-	}
-	if paper != A4 && paper != A3 {
-		return fmt.Errorf("span tables: html: paper %q: want %q or %q", paper, A4, A3)
-	}
-	title := a.Title
-	if title == "" {
-		title = "Span tables"
-	}
-	data := struct {
-		Title    string
-		Paper    Paper
-		Caution  string
-		Sections []section
-		Tables   []htmlTable
-	}{title, paper, Caution, headerSections(a, s), nil}
-	for i := range s.Tables {
-		data.Tables = append(data.Tables, s.htmlTable(&s.Tables[i]))
-	}
-	if err := pageTemplate.Execute(w, data); err != nil {
-		return fmt.Errorf("span tables: html: %w", err)
-	}
-	return nil
+	return writeHTMLPage(w, a, paper, s.varying(), s.marks(), s.bodies())
 }
 
-func (s *Set) htmlTable(t *Table) htmlTable {
+func htmlTableOf(t *Table) htmlTable {
 	numbers, list := notes(t)
-	ht := htmlTable{Title: s.Title(t), Notes: list}
+	ht := htmlTable{Notes: list}
 	for _, c := range t.Columns {
 		ht.Columns = append(ht.Columns, c.Label())
 	}

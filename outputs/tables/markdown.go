@@ -10,29 +10,7 @@ import (
 // WriteMarkdown writes the whole set: title, caution, assumptions, every
 // table with its footnotes, and the caution again.
 func (s *Set) WriteMarkdown(w io.Writer, a Assumptions) error {
-	bw := bufio.NewWriter(w)
-	title := a.Title
-	if title == "" {
-		title = "Span tables"
-	}
-	fmt.Fprintf(bw, "# %s\n\n> %s\n\n", mdEscape(title), Caution)
-	for _, sec := range headerSections(a, s) {
-		fmt.Fprintf(bw, "## %s\n\n", sec.Heading)
-		for _, it := range sec.Items {
-			fmt.Fprintf(bw, "- %s\n", mdEscape(it))
-		}
-		fmt.Fprintln(bw)
-	}
-	for i := range s.Tables {
-		fmt.Fprintf(bw, "## %s\n\n", mdEscape(s.Title(&s.Tables[i])))
-		s.writeMarkdownGrid(bw, &s.Tables[i])
-		fmt.Fprintln(bw)
-	}
-	fmt.Fprintf(bw, "> %s\n", Caution)
-	if err := bw.Flush(); err != nil {
-		return fmt.Errorf("span tables: markdown: %w", err)
-	}
-	return nil
+	return writeMarkdownPage(w, a, s.varying(), s.marks(), s.bodies())
 }
 
 // WriteMarkdownTable writes one table and its footnotes, followed by the
@@ -40,7 +18,7 @@ func (s *Set) WriteMarkdown(w io.Writer, a Assumptions) error {
 func (s *Set) WriteMarkdownTable(w io.Writer, t *Table) error {
 	bw := bufio.NewWriter(w)
 	fmt.Fprintf(bw, "**%s**\n\n", mdEscape(s.Title(t)))
-	s.writeMarkdownGrid(bw, t)
+	writeMarkdownGrid(bw, t)
 	fmt.Fprintf(bw, "\n> %s\n", Caution)
 	if err := bw.Flush(); err != nil {
 		return fmt.Errorf("span tables: markdown: %w", err)
@@ -48,7 +26,9 @@ func (s *Set) WriteMarkdownTable(w io.Writer, t *Table) error {
 	return nil
 }
 
-func (s *Set) writeMarkdownGrid(w io.Writer, t *Table) {
+// writeMarkdownGrid writes a table's grid and its footnotes; errors show
+// when the caller flushes its buffer.
+func writeMarkdownGrid(w io.Writer, t *Table) {
 	numbers, list := notes(t)
 	fmt.Fprint(w, "| Span \\ Length |")
 	for _, c := range t.Columns {
@@ -85,8 +65,9 @@ type section struct {
 	Items   []string
 }
 
-// headerSections is the page header shared by the Markdown and HTML pages.
-func headerSections(a Assumptions, s *Set) []section {
+// headerSections is the page header shared by the Markdown and HTML pages;
+// notes are the standard reading notes.
+func headerSections(a Assumptions, notes []string) []section {
 	var about []string
 	for _, f := range []struct{ label, value string }{
 		{"Maker", a.Maker}, {"Generated", a.Generated}, {"Program version", a.Version},
@@ -103,7 +84,7 @@ func headerSections(a Assumptions, s *Set) []section {
 		{"Defaults", a.Defaults},
 		{"Limit-state criteria", a.LimitStates},
 		{"Notes", a.Notes},
-		{"Reading the tables", s.StandardNotes()},
+		{"Reading the tables", notes},
 	} {
 		if len(sec.Items) > 0 {
 			out = append(out, sec)

@@ -1,10 +1,5 @@
 package tables
 
-import (
-	"fmt"
-	"strings"
-)
-
 // Table is one span table: rows of span, columns of length.
 type Table struct {
 	Key     Key
@@ -25,58 +20,34 @@ type Set struct {
 }
 
 func (s *Set) noteVarying() {
-	if len(s.Tables) == 0 {
-		return
+	var v varying
+	for i := range s.Tables {
+		v.note(s.Tables[i].Key)
 	}
-	first := s.Tables[0].Key
-	for _, t := range s.Tables[1:] {
-		s.VariesPitch = s.VariesPitch || t.Key.RoofPitchDeg != first.RoofPitchDeg
-		s.VariesBase = s.VariesBase || t.Key.Base != first.Base
-		s.VariesHoist = s.VariesHoist || t.Key.HoistKN != first.HoistKN
+	s.VariesPitch, s.VariesBase, s.VariesHoist = v.pitch, v.base, v.hoist
+}
+
+// varying is the set's Varies fields as the page writers read them.
+func (s *Set) varying() varying {
+	v := varying{tables: len(s.Tables), pitch: s.VariesPitch, base: s.VariesBase, hoist: s.VariesHoist}
+	if len(s.Tables) > 0 {
+		v.first = s.Tables[0].Key
 	}
+	return v
+}
+
+// marks reports which cell marks the set's tables use.
+func (s *Set) marks() marks {
+	m := marks{enveloped: s.Enveloped}
+	for i := range s.Tables {
+		m.note(&s.Tables[i])
+	}
+	return m
 }
 
 // Title names a table by its wind condition, eaves height and whichever of
 // pitch, base and hoist vary across the set.
-func (s *Set) Title(t *Table) string {
-	parts := []string{"Wind " + t.Key.Wind, fmt.Sprintf("eaves height %.2f m", t.Key.EavesHeightM)}
-	if s.VariesPitch {
-		parts = append(parts, pitchText(t.Key.RoofPitchDeg))
-	}
-	if s.VariesBase {
-		parts = append(parts, baseText(t.Key.Base))
-	}
-	if s.VariesHoist {
-		parts = append(parts, hoistText(t.Key.HoistKN))
-	}
-	return strings.Join(parts, ", ")
-}
+func (s *Set) Title(t *Table) string { return s.varying().title(t.Key) }
 
 // Fixed lists the key fields shared by every table, for the page header.
-func (s *Set) Fixed() []string {
-	if len(s.Tables) == 0 {
-		return nil
-	}
-	k := s.Tables[0].Key
-	var out []string
-	if !s.VariesPitch {
-		out = append(out, pitchText(k.RoofPitchDeg))
-	}
-	if !s.VariesBase {
-		out = append(out, baseText(k.Base))
-	}
-	if !s.VariesHoist {
-		out = append(out, hoistText(k.HoistKN))
-	}
-	return out
-}
-
-func pitchText(deg float64) string { return fmt.Sprintf("roof pitch %g°", deg) }
-func baseText(base string) string  { return base + " column bases" }
-
-func hoistText(kN float64) string {
-	if kN == 0 {
-		return "no hoist load"
-	}
-	return fmt.Sprintf("hoist load %g kN", kN)
-}
+func (s *Set) Fixed() []string { return s.varying().fixed() }
