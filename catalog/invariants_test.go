@@ -91,9 +91,10 @@ func TestFlatWidths(t *testing.T) {
 
 // TestSolidShapes: straps and rods against the elementary formulas, and the
 // rods' tensile stress areas against the tabulated ISO 898-1:2013 Table 4
-// values (from memory of ISO 898-1: M10 58.0, M12 84.3, M16 157, M20 245 mm²).
+// values (from memory of ISO 898-1: M10 58.0, M12 84.3, M16 157, M20 245,
+// M24 353, M30 561 mm²).
 func TestSolidShapes(t *testing.T) {
-	stress := map[float64]float64{10: 58.0, 12: 84.3, 16: 157, 20: 245}
+	stress := map[float64]float64{10: 58.0, 12: 84.3, 16: 157, 20: 245, 24: 353, 30: 561}
 	for d, want := range stress {
 		got, ok := TensileStressAreaMM2(d)
 		if !ok || !within(got, want, 0.003) {
