@@ -136,29 +136,18 @@ type strutChoice struct {
 // checked as a strut only: stated. ok is false when none passes.
 func (d *designer) designStruts(solves []bracingSolve, l bracingLayout) (strutChoice, bool) {
 	p := d.purlin.Section
-	exhaustive := d.s != nil && d.s.Exhaustive
+	cands := []catalog.Section{p} // the chosen purlin first, then heavier sections of its families
+	for _, sec := range d.lineSections(d.c.Options.Members.PurlinFamilies) {
+		if sec.MassKgPerM >= p.MassKgPerM && sec.Designation != p.Designation {
+			cands = append(cands, sec)
+		}
+	}
+	sec, closest, searched := lightestPassing(cands, d.s != nil && d.s.Exhaustive,
+		func(sec catalog.Section) strutVerdict { return d.checkStrut(sec, d.strutActions(solves, sec), false) })
 	var best *strutChoice
-	var closest strutVerdict
-	searched := 0
-	for _, sec := range append([]catalog.Section{p}, d.lineSections(d.c.Options.Members.PurlinFamilies)...) {
-		if sec.MassKgPerM < p.MassKgPerM || (searched > 0 && sec.Designation == p.Designation) {
-			continue
-		}
-		searched++
-		v := d.checkStrut(sec, d.strutActions(solves, sec), false)
-		if v.governing.Utilisation <= 1 {
-			if best == nil || sec.MassKgPerM < best.sec.MassKgPerM {
-				struts := float64((l.roofPanels + 1) * l.bracedBays)
-				best = &strutChoice{sec: sec, extraKg: (sec.MassKgPerM - p.MassKgPerM) * l.bayM * struts}
-			}
-			if !exhaustive {
-				break
-			}
-			continue
-		}
-		if closest.governing.Check == "" || v.governing.Utilisation < closest.governing.Utilisation {
-			closest = v
-		}
+	if sec != nil {
+		struts := float64((l.roofPanels + 1) * l.bracedBays)
+		best = &strutChoice{sec: *sec, extraKg: (sec.MassKgPerM - p.MassKgPerM) * l.bayM * struts}
 	}
 	if best == nil {
 		g := closest.governing

@@ -157,26 +157,8 @@ func (d *designer) mullionSections() []catalog.Section {
 // designMullions picks the lightest passing mullion section; every mullion
 // of both end walls takes the tallest one's section.
 func (d *designer) designMullions(e endWallLayout, girtSpacingM float64) bool {
-	exhaustive := d.s != nil && d.s.Exhaustive
-	var best *catalog.Section
-	var closest strutVerdict
-	searched := 0
-	for _, sec := range d.mullionSections() {
-		searched++
-		v := d.checkMullion(e, sec, girtSpacingM, false)
-		if v.governing.Utilisation <= 1 {
-			if best == nil || sec.MassKgPerM < best.MassKgPerM {
-				best = &sec
-			}
-			if !exhaustive {
-				break
-			}
-			continue
-		}
-		if closest.governing.Check == "" || v.governing.Utilisation < closest.governing.Utilisation {
-			closest = v
-		}
-	}
+	best, closest, searched := lightestPassing(d.mullionSections(), d.s != nil && d.s.Exhaustive,
+		func(sec catalog.Section) strutVerdict { return d.checkMullion(e, sec, girtSpacingM, false) })
 	if best == nil {
 		g := closest.governing
 		d.fail(RoleEndWallColumn, fmt.Sprintf("no C or 2C section passes as a %.2f m end-wall column at %.2f m spacing; closest at utilisation %.2f, failing %s (%s %s, %s)",

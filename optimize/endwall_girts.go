@@ -112,26 +112,8 @@ func (d *designer) designEndWallGirts(l bracingLayout, e endWallLayout, spacingM
 	if run.pieces == 0 {
 		return true
 	}
-	exhaustive := d.s != nil && d.s.Exhaustive
-	var best *catalog.Section
-	var closest strutVerdict
-	searched := 0
-	for _, sec := range d.lineSections(d.c.Options.Members.GirtFamilies) {
-		searched++
-		v := d.checkEndWallGirt(sec, e.spacingM, spacingM, false)
-		if v.governing.Utilisation <= 1 {
-			if best == nil || sec.MassKgPerM < best.MassKgPerM {
-				best = &sec
-			}
-			if !exhaustive {
-				break
-			}
-			continue
-		}
-		if closest.governing.Check == "" || v.governing.Utilisation < closest.governing.Utilisation {
-			closest = v
-		}
-	}
+	best, closest, searched := lightestPassing(d.lineSections(d.c.Options.Members.GirtFamilies), d.s != nil && d.s.Exhaustive,
+		func(sec catalog.Section) strutVerdict { return d.checkEndWallGirt(sec, e.spacingM, spacingM, false) })
 	if best == nil {
 		g := closest.governing
 		d.fail(RoleEndWallGirt, fmt.Sprintf("no girt section of families %v spans %.2f m at %.2f m spacing; closest at utilisation %.2f, failing %s (%s %s, %s)",
