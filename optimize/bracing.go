@@ -152,7 +152,8 @@ func (d *designer) setBracingGroups(l bracingLayout, roof, wall diagonalChoice, 
 	roofChecks = append(roofChecks, strut.verdict.checks...)
 	strutNote := fmt.Sprintf("purlins act as struts (%s), checked as simply supported beam-columns over one bay", strut.sec.Designation)
 	if strut.extraKg > 0 {
-		strutNote += fmt.Sprintf("; upgraded from %s in the braced bays, %.1f kg added to this group", d.purlin.Section.Designation, strut.extraKg)
+		strutNote += fmt.Sprintf("; upgraded from %s with %d bridging row(s) to %s with %d in the braced bays, %.1f kg added to this group",
+			d.purlin.Section.Designation, d.purlin.Bridging, strut.sec.Designation, strut.bridging, strut.extraKg)
 	}
 	d.record(GroupCalculation{Role: RoleRoofBracing, Designation: roof.sec.Designation, Searched: roof.searched + strut.searched, Checks: roofChecks,
 		Notes: append(slices.Clone(common),

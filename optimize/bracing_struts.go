@@ -90,7 +90,7 @@ type strutVerdict struct {
 // with the compressed flange's segment between bridging rows (the
 // sheeting's restraint ignored: conservative); combined actions
 // AS/NZS 4600:2018 cl. 3.5.1 (compression) or 3.5.2 (tension).
-func (d *designer) checkStrut(sec catalog.Section, acts []strutAction, keep bool) strutVerdict {
+func (d *designer) checkStrut(sec catalog.Section, acts []strutAction, bridging int, keep bool) strutVerdict {
 	var v strutVerdict
 	caps, err := capacitiesFor(d.cat).of(sec)
 	if err != nil || caps == nil {
@@ -98,7 +98,7 @@ func (d *designer) checkStrut(sec catalog.Section, acts []strutAction, keep bool
 		return v
 	}
 	L := d.c.BaySpacingM * 1e3
-	seg := L / float64(d.purlin.Bridging+1)
+	seg := L / float64(bridging+1)
 	m := coldformed.BeamColumn{Compression: coldformed.EffectiveLengths{Lex: L, Ley: seg, Lez: seg},
 		Bending: coldformed.Segment{Length: seg}}
 	for _, a := range acts {
@@ -125,7 +125,8 @@ func (d *designer) checkStrut(sec catalog.Section, acts []strutAction, keep bool
 type strutChoice struct {
 	sec      catalog.Section
 	verdict  strutVerdict
-	extraKg  float64 // mass added over the chosen purlins
+	bridging int     // bridging rows per span in the braced bays
+	extraKg  float64 // mass added over the chosen purlins and their bridging
 	searched int
 }
 
@@ -142,12 +143,31 @@ func (d *designer) designStruts(solves []bracingSolve, l bracingLayout) (strutCh
 			cands = append(cands, sec)
 		}
 	}
-	sec, closest, searched := lightestPassing(cands, d.s != nil && d.s.Exhaustive,
-		func(sec catalog.Section) strutVerdict { return d.checkStrut(sec, d.strutActions(solves, sec), false) })
+	// The braced bays may also take more bridging rows than the rest of the
+	// roof: each (rows, section) pair is priced by the steel it adds, so the
+	// upgrade is the lightest of heavier struts and more bridging.
+	struts := float64((l.roofPanels + 1) * l.bracedBays)
+	bridgingPieces := float64(2 * max(len(d.purlin.PositionsM)-1, 1) * l.bracedBays) // per row, both slopes
 	var best *strutChoice
-	if sec != nil {
-		struts := float64((l.roofPanels + 1) * l.bracedBays)
-		best = &strutChoice{sec: *sec, extraKg: (sec.MassKgPerM - p.MassKgPerM) * l.bayM * struts}
+	var closest strutVerdict
+	searched := 0
+	for rows := d.purlin.Bridging; rows <= maxBridgingRows; rows++ {
+		sec, cl, n := lightestPassing(cands, d.s != nil && d.s.Exhaustive,
+			func(sec catalog.Section) strutVerdict {
+				return d.checkStrut(sec, d.strutActions(solves, sec), rows, false)
+			})
+		searched += n
+		if closest.governing.Check == "" || (cl.governing.Check != "" && cl.governing.Utilisation < closest.governing.Utilisation) {
+			closest = cl
+		}
+		if sec == nil {
+			continue
+		}
+		extra := (sec.MassKgPerM-p.MassKgPerM)*l.bayM*struts +
+			float64(rows-d.purlin.Bridging)*bridgingPieces*d.purlin.SpacingM*bridgingKgPerM
+		if best == nil || extra < best.extraKg {
+			best = &strutChoice{sec: *sec, bridging: rows, extraKg: extra}
+		}
 	}
 	if best == nil {
 		g := closest.governing
@@ -156,6 +176,6 @@ func (d *designer) designStruts(solves []bracingSolve, l bracingLayout) (strutCh
 		return strutChoice{}, false
 	}
 	best.searched = searched
-	best.verdict = d.checkStrut(best.sec, d.strutActions(solves, best.sec), true)
+	best.verdict = d.checkStrut(best.sec, d.strutActions(solves, best.sec), best.bridging, true)
 	return *best, true
 }

@@ -260,7 +260,7 @@ func TestBracingStrutActionsByHand(t *testing.T) {
 	if a := acts[0]; !near(a.axialN, wantN, 1e-12) || !near(a.wNmm, w, 1e-12) || !(wantN > 0) {
 		t.Errorf("got N* %.6g N, w %.6g kN/m; want %.6g N (> 0), %.6g kN/m", a.axialN, a.wNmm, wantN, w)
 	}
-	v := d.checkStrut(sec, acts[:1], true)
+	v := d.checkStrut(sec, acts[:1], d.purlin.Bridging, true)
 	matched := 0
 	for _, line := range v.checks {
 		switch line.Name {
