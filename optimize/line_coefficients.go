@@ -84,69 +84,36 @@ func envelopeOdd(c lineCoefficients, spanType string, bays int) lineCoefficients
 	return c
 }
 
-// solveLine analyses a unit line: spans of 1000 mm under 1 N/mm, pinned at
-// the first support and on rollers at the others, with E·I doubled over
-// the laps of a lapped line.
+// solveLine analyses a unit line built by analysis.NewPurlinLine: spans of
+// 1000 mm under 1 N/mm, with E·I doubled over the laps of a lapped line.
 func solveLine(k coefficientKey) (lineCoefficients, error) {
 	const (
 		L = 1000.0 // mm
 		E = 200000.0
 		I = 1e6
-		A = 1e4
-		w = 1.0 // N/mm, downward
+		w = 1.0 // N/mm, toward the supports
 	)
-	var xs []float64 // node positions
-	var supports []int
-	for s := 0; s <= k.spans; s++ {
-		x := float64(s) * L
-		interior := s > 0 && s < k.spans
-		if k.lapped && interior {
-			xs = append(xs, x-lapFraction*L)
-		}
-		supports = append(supports, len(xs))
-		xs = append(xs, x)
-		if k.lapped && interior {
-			xs = append(xs, x+lapFraction*L)
-		}
+	spec := analysis.PurlinLineSpec{Spans: k.spans, SpanMM: L, Type: analysis.ContinuousSpans,
+		Section: analysis.Section{E: E, A: 1e4, I: I}}
+	if k.lapped {
+		spec.Type, spec.LapMM = analysis.LappedSpans, lapFraction*L
 	}
-	f := &analysis.Frame{}
-	for _, x := range xs {
-		f.Nodes = append(f.Nodes, analysis.Node{X: x})
+	pl, err := analysis.NewPurlinLine(spec)
+	if err != nil {
+		return lineCoefficients{}, err
 	}
-	isSupport := map[int]bool{}
-	for i, n := range supports {
-		isSupport[n] = true
-		if i == 0 {
-			f.Supports = append(f.Supports, analysis.PinnedSupport(n))
-		} else {
-			f.Supports = append(f.Supports, analysis.RollerX(n))
-		}
-	}
-	lapped := make([]bool, len(xs)-1) // member i is inside a lap
-	for i := range len(xs) - 1 {
-		lap := k.lapped && (isSupport[i] && i > 0 || isSupport[i+1] && i+1 < len(xs)-1) &&
-			xs[i+1]-xs[i] < 0.5*L
-		lapped[i] = lap
-		ii := I
-		if lap {
-			ii = 2 * I
-		}
-		f.Members = append(f.Members, analysis.Member{Name: fmt.Sprint("piece ", i), Start: i, End: i + 1, E: E, A: A, I: ii})
-	}
-	lc := analysis.LoadCase{Name: "unit"}
-	for m := range f.Members {
-		lc.Members = append(lc.Members, analysis.UniformLoad(m, analysis.GlobalAxes, 0, -w))
-	}
+	var lc analysis.LoadCase
+	pl.Uniform(&lc, w)
 	var ws analysis.Workspace
-	sol, err := ws.Solve(f, []analysis.LoadCase{lc})
+	sol, err := ws.Solve(&pl.Frame, []analysis.LoadCase{lc})
 	if err != nil {
 		return lineCoefficients{}, fmt.Errorf("line of %d spans: %w", k.spans, err)
 	}
 	comb := analysis.Primary(0)
 	var c lineCoefficients
-	for m := range f.Members {
+	for m, mem := range pl.Frame.Members {
 		share := 1.0
-		if lapped[m] {
+		if mem.I > I {
 			share = 0.5 // two sections share the moment and shear over a lap
 		}
 		e := sol.Extremes(comb, m)
@@ -154,11 +121,11 @@ func solveLine(k coefficientKey) (lineCoefficients, error) {
 		c.Hog = math.Max(c.Hog, -e.MinM.Value*share/(w*L*L))
 		c.Shear = math.Max(c.Shear, math.Max(e.MaxV.Value, -e.MinV.Value)*share/(w*L))
 		d, _ := sol.MaxDeflection(comb, m)
-		c.Deflection = math.Max(c.Deflection, math.Abs(d)*E*(I)/(w*L*L*L*L))
+		c.Deflection = math.Max(c.Deflection, math.Abs(d)*E*I/(w*L*L*L*L))
 	}
-	for i, n := range supports {
+	for i, n := range pl.Supports {
 		r := sol.Reaction(comb, n)[1] / (w * L)
-		if i == 0 || i == len(supports)-1 {
+		if i == 0 || i == len(pl.Supports)-1 {
 			c.EndReaction = math.Max(c.EndReaction, r)
 		} else {
 			c.InteriorReaction = math.Max(c.InteriorReaction, r)
