@@ -22,8 +22,8 @@ func TestLineCoefficientsAgainstBeamTables(t *testing.T) {
 		// 2-span: support −wL²/8, span +9wL²/128, reactions 0.375/1.25 wL, shear 0.625 wL, δ 0.00542 wL⁴/EI.
 		{"two-span piece", grids.SpanContinuous, 4, lineCoefficients{Sag: 9.0 / 128, Hog: 0.125, Shear: 0.625,
 			EndReaction: 0.375, InteriorReaction: 1.25, Deflection: 0.005416}, 2e-3},
-		// 3 spans with no laps would be lapped with lapFraction 0; here the
-		// two-span piece of an odd bay count envelopes the simple span.
+		// An odd bay count leaves one single-span piece per line, so the
+		// two-span piece's coefficients are enveloped with the simple span's.
 		{"two-span pieces, odd bays", grids.SpanContinuous, 3, lineCoefficients{Sag: 0.125, Hog: 0.125, Shear: 0.625,
 			EndReaction: 0.5, InteriorReaction: 1.25, Deflection: 5.0 / 384}, 2e-3},
 	}
