@@ -108,7 +108,23 @@ func (d *designer) restraintForcesN(l bracingLayout) (roofN, wallN float64) {
 // panel points and the restraint forces the next rafter's. Each eave
 // reaction then loads the top of a side-wall bay (the columns its chords,
 // the eave purlin its top strut), held at the column bases.
+// The bays are determinate, so the solves depend on the layout, the
+// loads and the frame's restraint forces, not on the struts' sections: the
+// bracing step's solves are kept (d.braceSolves) and the footings reuse
+// them for the same layout.
 func (d *designer) solveBracing(l bracingLayout) ([]bracingSolve, error) {
+	if d.braceSolves != nil && d.braceLayout == l {
+		return d.braceSolves, nil
+	}
+	out, err := d.solveBracingBays(l)
+	if err == nil {
+		d.braceSolves, d.braceLayout = out, l
+	}
+	return out, err
+}
+
+// solveBracingBays solves the bays of solveBracing.
+func (d *designer) solveBracingBays(l bracingLayout) ([]bracingSolve, error) {
 	diag := analysis.Section{E: steelE, A: 100} // any area: the bays are determinate (solveBay)
 	roofSpec := analysis.BracingBaySpec{LengthMM: 2 * l.slopeM * 1e3, WidthMM: l.bayM * 1e3, Panels: l.roofPanels,
 		Chord: trussSection(d.frm.Rafter, 1000), Strut: trussSection(d.purlin.Section, 500), Diagonal: diag,

@@ -18,6 +18,18 @@ type Settings struct {
 	// Record keeps the full calculation (Result.Calculation) for a report.
 	// Default false: the sweep keeps only the summary.
 	Record bool
+	// Memo, if set, replays sub-searches already solved for an earlier
+	// case with exactly the same inputs (see Memo); one Memo serves one
+	// catalogue. It is not used with Exhaustive or Record. Default nil.
+	Memo *Memo
+}
+
+// memo returns the Memo to use, or nil.
+func (s *Settings) memo() *Memo {
+	if s == nil || s.Exhaustive || s.Record {
+		return nil
+	}
+	return s.Memo
 }
 
 func (s *Settings) catalogue() *catalog.Catalogue {
@@ -68,6 +80,9 @@ type designer struct {
 	// What earlier steps chose, for the later ones.
 	purlin, girt lineChoice
 	frm          frameChoice
+	// The bracing bays' solves and the layout they are for (solveBracing).
+	braceSolves []bracingSolve
+	braceLayout bracingLayout
 }
 
 // fail records the first failing member group and stops the design.

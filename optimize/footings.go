@@ -51,7 +51,7 @@ func (d *designer) footings() bool {
 	}
 	var designs [2]footing.Footing
 	for i, b := range []footing.Base{plain.base, withBracing.base} {
-		f, err := footing.Design(b, &padOptions, nil)
+		f, err := designFooting(d.s.memo(), b)
 		if err != nil {
 			var ns *footing.NoSolutionError
 			if errors.As(err, &ns) {

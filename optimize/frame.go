@@ -27,11 +27,21 @@ func (d *designer) frame() bool {
 		d.fail(RoleRafter, fmt.Sprintf("frame model: %v", err))
 		return false
 	}
+	memo, key := d.s.memo(), memoKey{}
+	if memo != nil {
+		key = m.frameKey()
+		if f, ok := memo.frame(key); ok {
+			d.r.Analyses += f.analyses
+			m.publish(&f.accepted)
+			return true
+		}
+	}
 	cands := m.candidates()
 	if len(cands) == 0 {
 		d.fail(RoleRafter, fmt.Sprintf("no C or 2C sections in catalogue %s for frame families %v", d.cat.Name, d.c.Options.Members.FrameFamilies))
 		return false
 	}
+	spent := d.r.Analyses
 	best, ok, err := m.search(cands)
 	if err != nil {
 		d.fail(RoleRafter, fmt.Sprintf("frame analysis: %v", err))
@@ -41,7 +51,7 @@ func (d *designer) frame() bool {
 		d.fail(best.role(), best.reason(m))
 		return false
 	}
-	return m.accept(best)
+	return m.accept(best, memo, key, spent)
 }
 
 // newFrameModel prepares the frame search of the designer's case.

@@ -2,7 +2,6 @@ package optimize
 
 import (
 	"math"
-	"slices"
 
 	"github.com/spansweep/spansweep/catalog"
 	"github.com/spansweep/spansweep/checks/analysis"
@@ -155,9 +154,12 @@ func (m *frameModel) members(o *frameOutcome, rs, cs *memberSpec, l *lambdas, re
 	return r.pass && c.pass, nil
 }
 
-// exactGoverning makes λc exact for every combination whose bounded
-// utilisation exceeds the largest exact one (all of them with all set), so
-// the reported governing check is exact; fly braces stay as found.
+// exactGoverning makes each member's reported governing check exact: λc
+// is computed for every combination whose bounded utilisation in a member
+// exceeds the largest exact one of that member (its own deflection ratio
+// included), and for all of them with all set. A bounded utilisation is
+// never below the exact one, so the member's governing value is then the
+// exact maximum whatever order the checks ran in. Fly braces stay as found.
 func (m *frameModel) exactGoverning(o *frameOutcome, rs, cs *memberSpec, l *lambdas, all bool) error {
 	for {
 		r, err := m.evaluateMember(rs, l, flyGiven, o.rafter.fly, true, math.Inf(1))
@@ -170,19 +172,24 @@ func (m *frameModel) exactGoverning(o *frameOutcome, rs, cs *memberSpec, l *lamb
 		}
 		o.rafter, o.column = r, c
 		o.util = math.Max(math.Max(o.drift.ratio, o.apex.ratio), math.Max(r.util, c.util))
-		exactMax := math.Max(o.drift.ratio, o.apex.ratio)
-		for _, cs := range append(slices.Clip(r.all), c.all...) {
-			if l.exact[cs.comb] {
-				exactMax = math.Max(exactMax, cs.util)
-			}
-		}
 		more := false
-		for _, cs := range append(slices.Clip(r.all), c.all...) {
-			if !l.exact[cs.comb] && (all || cs.util > exactMax) {
-				if err := m.exactLambda(l, cs.comb); err != nil {
-					return err
+		for _, mo := range []struct {
+			checks []checkedSegment
+			sls    float64
+		}{{r.all, o.apex.ratio}, {c.all, o.drift.ratio}} {
+			exactMax := mo.sls
+			for _, cs := range mo.checks {
+				if l.exact[cs.comb] {
+					exactMax = math.Max(exactMax, cs.util)
 				}
-				more = true
+			}
+			for _, cs := range mo.checks {
+				if !l.exact[cs.comb] && (all || cs.util > exactMax) {
+					if err := m.exactLambda(l, cs.comb); err != nil {
+						return err
+					}
+					more = true
+				}
 			}
 		}
 		if !more {

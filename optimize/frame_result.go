@@ -3,32 +3,75 @@ package optimize
 import (
 	"fmt"
 	"math"
+	"slices"
 
 	"github.com/spansweep/spansweep/checks/actions"
 	"github.com/spansweep/spansweep/checks/analysis"
 	"github.com/spansweep/spansweep/checks/coldformed"
 )
 
+// acceptedFrame is the chosen frame checked in full: everything the frame
+// step hands on, apart from counts that depend on the number of frames.
+type acceptedFrame struct {
+	cd                   frameCandidate
+	o                    frameOutcome
+	rafterGov, columnGov Governing
+	frm                  frameChoice
+}
+
 // accept re-evaluates the chosen candidate with exact governing checks and
 // stores the frame's member groups, reactions and (when recording) its
-// calculation.
-func (m *frameModel) accept(best searchResult) bool {
+// calculation. It reports the analyses it spent since spent (the count
+// when the search began) to the memo, if any, under key.
+func (m *frameModel) accept(best searchResult, memo *Memo, key memoKey, spent int) bool {
+	a, ok := m.finalise(best)
+	if !ok {
+		return false
+	}
+	if memo != nil {
+		memo.storeFrame(key, frameMemo{accepted: a, analyses: m.d.r.Analyses - spent})
+	}
+	m.publish(&a)
+	if m.d.r.Calculation != nil {
+		m.recordFrame(&a.o, a.cd.rafter.Designation, a.cd.column.Designation, best.checked)
+	}
+	return true
+}
+
+// finalise checks the search's choice in full.
+func (m *frameModel) finalise(best searchResult) (acceptedFrame, bool) {
 	cd := best.cd
+	// The search reorders the combinations (failedFirst); the full check
+	// starts from the grid's order so that it depends on the choice alone,
+	// not on the search that found it (a Memo replays it).
+	m.order = slices.Clone(m.uls)
 	t := m.plain
 	if cd.braced {
 		var err error
 		if t, err = m.newTopology(best.o.knee, *cd.rafter, *cd.column); err != nil {
 			m.d.fail(RoleRafter, fmt.Sprintf("frame analysis: %v", err))
-			return false
+			return acceptedFrame{}, false
 		}
 		t.setBrace(best.o.brace)
 	}
 	o, err := m.evaluate(&cd, t, true)
 	if err != nil || !o.pass {
 		m.d.fail(RoleRafter, fmt.Sprintf("frame re-check of rafter %s, column %s: pass %v, error %v", cd.rafter.Designation, cd.column.Designation, o.pass, err))
-		return false
+		return acceptedFrame{}, false
 	}
 	o.brace, o.braceLenMM, o.braceUtil = best.o.brace, best.o.braceLenMM, best.o.braceUtil
+	a := acceptedFrame{cd: cd, o: o,
+		rafterGov: m.memberGoverning(o.rafter, o.apex), columnGov: m.memberGoverning(o.column, o.drift),
+		frm: frameChoice{Rafter: *cd.rafter, Column: *cd.column}}
+	a.frm.RafterMomentKNm, a.frm.ColumnMomentKNm = m.largestMomentKNm(rafterKind), m.largestMomentKNm(columnKind)
+	a.frm.Left, a.frm.Right = m.baseReactions()
+	return a, true
+}
+
+// publish stores an accepted frame's member groups and choice in the
+// result, counted for the case's number of frames.
+func (m *frameModel) publish(a *acceptedFrame) {
+	cd, o := &a.cd, &a.o
 	d, g := m.d, &m.g
 	frames := d.c.Bays + 1
 	d.r.Frames = frames
@@ -37,9 +80,9 @@ func (m *frameModel) accept(best searchResult) bool {
 			MassKg: float64(count) * lengthM * kgPerM}
 	}
 	raf := group(RoleRafter, cd.rafter.Designation, 2*frames, g.rafterMM/1e3, cd.rafter.MassKgPerM)
-	raf.Governing, raf.DeflectionRatio = m.memberGoverning(o.rafter, o.apex), o.apex.ratio
+	raf.Governing, raf.DeflectionRatio = a.rafterGov, o.apex.ratio
 	col := group(RoleColumn, cd.column.Designation, 2*frames, g.heightMM/1e3, cd.column.MassKgPerM)
-	col.Governing, col.DeflectionRatio = m.memberGoverning(o.column, o.drift), o.drift.ratio
+	col.Governing, col.DeflectionRatio = a.columnGov, o.drift.ratio
 	d.set(raf)
 	d.set(col)
 	if o.knee != nil {
@@ -56,13 +99,7 @@ func (m *frameModel) accept(best searchResult) bool {
 		d.set(MemberGroup{Role: RoleFlyBrace, Designation: m.brace0.Designation, Count: d.r.FlyBracesPerFrame * frames,
 			LengthEachM: math.Sqrt2 * math.Max(cd.rafter.DepthMM, cd.column.DepthMM) / 1e3, MassKg: kg})
 	}
-	d.frm = frameChoice{Rafter: *cd.rafter, Column: *cd.column}
-	d.frm.RafterMomentKNm, d.frm.ColumnMomentKNm = m.largestMomentKNm(rafterKind), m.largestMomentKNm(columnKind)
-	d.frm.Left, d.frm.Right = m.baseReactions()
-	if d.r.Calculation != nil {
-		m.recordFrame(&o, cd.rafter.Designation, cd.column.Designation, best.checked)
-	}
-	return true
+	d.frm = a.frm
 }
 
 // memberGoverning returns the member's governing check: its worst ULS

@@ -89,7 +89,10 @@ func (s *sweepRun) design(ctx context.Context, w *dataset.Writer, stderr io.Writ
 	lo, hi := s.shard.Range(s.grid.Count())
 	total := hi - lo
 	stats := runStats{resumed: w.Rows()}
-	settings := &optimize.Settings{Catalogue: s.cat}
+	// One memo for the run: cases that pose a member group the same
+	// problem (the same frame for every number of bays, say) reuse its
+	// choice; the rows are the same as without it (optimize.Memo).
+	settings := &optimize.Settings{Catalogue: s.cat, Memo: &optimize.Memo{}}
 	eng := optimize.Engine{
 		Workers: s.flags.workers,
 		Design:  func(c grids.Case) optimize.Result { return designCase(c, settings) },

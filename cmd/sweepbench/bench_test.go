@@ -102,7 +102,7 @@ func BenchmarkEngine(b *testing.B) {
 	for _, w := range []int{1, 2} {
 		b.Run(fmt.Sprintf("workers=%d", w), func(b *testing.B) {
 			for b.Loop() {
-				run, _, _ := timeCases(cases, catalog.Default(), w)
+				run, _, _ := timeCases(cases, catalog.Default(), w, true)
 				b.ReportMetric(run.CasesPerS, "cases/s")
 			}
 		})

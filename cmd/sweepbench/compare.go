@@ -17,8 +17,8 @@ func (e *differError) Error() string { return e.msg }
 const maxDiffs = 10
 
 // compareCommand compares two dataset directories and prints the verdict.
-func compareCommand(a, b string, stdout io.Writer) error {
-	n, diffs, err := compareDatasets(a, b)
+func compareCommand(a, b string, ignore []string, stdout io.Writer) error {
+	n, diffs, err := compareDatasets(a, b, ignore...)
 	if err != nil {
 		return err
 	}
@@ -35,7 +35,8 @@ func compareCommand(a, b string, stdout io.Writer) error {
 // compareDatasets reads the datasets in dirs a and b (every part of each, as
 // one) and lists the first differences: row count, then row by row in order.
 // Provenance columns count too, so parts of another grid or catalogue differ.
-func compareDatasets(a, b string) (rows int, diffs []string, err error) {
+// Fields named in ignore (dataset.Row field names) are left out.
+func compareDatasets(a, b string, ignore ...string) (rows int, diffs []string, err error) {
 	ra, err := readRows(a)
 	if err != nil {
 		return 0, nil, err
@@ -43,6 +44,14 @@ func compareDatasets(a, b string) (rows int, diffs []string, err error) {
 	rb, err := readRows(b)
 	if err != nil {
 		return 0, nil, err
+	}
+	for _, f := range ignore {
+		if err := clearField(ra, f); err != nil {
+			return 0, nil, err
+		}
+		if err := clearField(rb, f); err != nil {
+			return 0, nil, err
+		}
 	}
 	if len(ra) != len(rb) {
 		diffs = append(diffs, fmt.Sprintf("row count: %s has %d, %s has %d", a, len(ra), b, len(rb)))
@@ -83,4 +92,17 @@ func firstField(a, b dataset.Row) string {
 		}
 	}
 	return ""
+}
+
+// clearField sets field name of every row to its zero value.
+func clearField(rows []dataset.Row, name string) error {
+	f, ok := reflect.TypeFor[dataset.Row]().FieldByName(name)
+	if !ok || len(f.Index) != 1 {
+		return usagef("--ignore %s: no such dataset field (use the Go field names of dataset.Row, e.g. Analyses)", name)
+	}
+	for i := range rows {
+		v := reflect.ValueOf(&rows[i]).Elem().Field(f.Index[0])
+		v.SetZero()
+	}
+	return nil
 }

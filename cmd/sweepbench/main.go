@@ -34,6 +34,8 @@ type options struct {
 	json, large     bool
 	largeGrids      []string
 	compare         bool
+	ignore          []string
+	memo            bool
 	pipelineOnly    bool
 	limit           int
 }
@@ -84,8 +86,10 @@ func parseOptions(args []string, stdout io.Writer) (*options, *pflag.FlagSet, er
 	fs.StringSliceVar(&o.largeGrids, "large-grids", []string{"testdata/examples/large-250k.toml", "testdata/examples/large-1m.toml"}, "grid `FILES` for --large, smallest first")
 	fs.StringVar(&o.spansweep, "spansweep", "", "spansweep `BINARY` for --large; default: go build it into a temporary directory")
 	fs.BoolVar(&o.pipelineOnly, "pipeline-only", false, "with --large: sweep with a catalogue of the embedded straps and rods only, so every case stops at the purlin step; measures the sweep's streaming, writing and memory, not the design")
+	fs.BoolVar(&o.memo, "memo", true, "time the sweep as spansweep runs it, reusing sub-searches with equal inputs (optimize.Memo); --memo=false times every search in full")
 	fs.IntVar(&o.limit, "limit", 0, "time only this many evenly spaced cases of the grid (0: all)")
 	fs.BoolVar(&o.compare, "compare", false, "instead, compare two dataset directories given as arguments: DIR1 DIR2")
+	fs.StringSliceVar(&o.ignore, "ignore", nil, "with --compare: dataset `FIELDS` (Go names of dataset.Row, e.g. Analyses) left out of the comparison")
 	fs.SetOutput(io.Discard)
 	fs.Usage = func() {
 		fmt.Fprintln(stdout, "Usage: sweepbench [flags]\n       sweepbench --compare DIR1 DIR2\n\nMeasures spansweep's throughput, search efficiency and peak memory.\n\nFlags:")
@@ -93,8 +97,7 @@ func parseOptions(args []string, stdout io.Writer) (*options, *pflag.FlagSet, er
 	}
 	err := fs.Parse(args)
 	if errors.Is(err, pflag.ErrHelp) {
-		fs.Usage()
-		return nil, nil, err
+		return nil, nil, err // Parse has printed the usage
 	}
 	if err != nil {
 		return nil, nil, usagef("%v (see --help)", err)
@@ -112,6 +115,8 @@ func (o *options) validate(nargs int) error {
 		return usagef("--sample %d: allowed 0 or more", o.sample)
 	case o.limit < 0:
 		return usagef("--limit %d: allowed 0 or more", o.limit)
+	case len(o.ignore) > 0 && !o.compare:
+		return usagef("--ignore applies only with --compare")
 	case o.pipelineOnly && !o.large:
 		return usagef("--pipeline-only applies only with --large")
 	case len(o.workers) == 0:
@@ -127,7 +132,7 @@ func (o *options) validate(nargs int) error {
 
 func dispatch(o *options, args []string, stdout, stderr io.Writer) error {
 	if o.compare {
-		return compareCommand(args[0], args[1], stdout)
+		return compareCommand(args[0], args[1], o.ignore, stdout)
 	}
 	rep := &report{DateUTC: time.Now().UTC().Format(time.RFC3339), GoVersion: runtime.Version(), CPUs: runtime.NumCPU()}
 	var err error
@@ -159,9 +164,9 @@ func measureGrid(o *options, rep *report) error {
 		cases = min(cases, o.limit)
 	}
 	sample := sampleCases(g, cases)
-	rep.Grid, rep.Cases, rep.GridCases = g.File, len(sample), g.Count()
+	rep.Grid, rep.Cases, rep.GridCases, rep.Memo = g.File, len(sample), g.Count(), o.memo
 	for i, w := range o.workers {
-		wr, times, state := timeCases(sample, cat, w)
+		wr, times, state := timeCases(sample, cat, w, o.memo)
 		rep.Throughput = append(rep.Throughput, wr)
 		if i == 0 {
 			rep.PerCase = summarise(times)

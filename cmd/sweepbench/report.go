@@ -15,6 +15,7 @@ type report struct {
 	Grid       string            `json:"grid,omitempty"`
 	Cases      int               `json:"cases,omitempty"` // cases timed
 	GridCases  int               `json:"grid_cases,omitempty"`
+	Memo       bool              `json:"memo"` // sub-searches with equal inputs reused, as sweep does
 	Design     designState       `json:"design"`
 	Throughput []workerRun       `json:"throughput,omitempty"`
 	Speedup    float64           `json:"speedup,omitempty"` // cases/s of the last worker count over the first
@@ -49,6 +50,11 @@ func (r *report) writeText(w io.Writer) {
 	if r.Grid != "" {
 		line("grid", "%s", r.Grid)
 		line("cases timed", "%d of the grid's %d (evenly spaced)", r.Cases, r.GridCases)
+		if r.Memo {
+			line("memo", "on: sub-searches with inputs equal to an earlier case's replayed, as sweep runs")
+		} else {
+			line("memo", "off: every search run in full")
+		}
 		line("design: ok cases", "%d", r.Design.OK)
 		line("design: no_solution cases", "%d", r.Design.NoSolution)
 		for _, k := range r.Design.failedAtKeys() {

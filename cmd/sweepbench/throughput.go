@@ -37,9 +37,13 @@ type designState struct {
 }
 
 // timeCases designs cases through the engine with the given worker count,
-// as sweep does, and returns the wall time and each case's time.
-func timeCases(cases []grids.Case, cat *catalog.Catalogue, workers int) (workerRun, []time.Duration, designState) {
+// as sweep does (with a fresh optimize.Memo when memo is set), and returns
+// the wall time and each case's time.
+func timeCases(cases []grids.Case, cat *catalog.Catalogue, workers int, memo bool) (workerRun, []time.Duration, designState) {
 	settings := &optimize.Settings{Catalogue: cat}
+	if memo {
+		settings.Memo = &optimize.Memo{}
+	}
 	times := make([]time.Duration, len(cases))
 	slot := make(map[int]int, len(cases)) // case index → position in cases
 	for i, c := range cases {
