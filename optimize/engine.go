@@ -14,7 +14,10 @@ import (
 // the results on in case order (DESIGN.md §2, §8).
 //
 // Memory is bounded by the worker count, not the grid size: at most
-// 2×Workers cases are in flight or waiting in the reorder buffer.
+// 32×Workers cases are in flight or waiting in the reorder buffer (a few
+// kilobytes each). The window is that wide because case times differ by a
+// factor of 30 (a memo hit against a full frame search): with a narrow one
+// a slow case holds the other workers idle until it is emitted.
 type Engine struct {
 	// Workers is the number of cases designed at once; 0 means runtime.NumCPU().
 	Workers int
@@ -45,7 +48,7 @@ func (e *Engine) Run(ctx context.Context, cases iter.Seq[grids.Case], emit func(
 	if workers <= 0 {
 		workers = runtime.NumCPU()
 	}
-	window := 2 * workers
+	window := 32 * workers
 	slots := make(chan struct{}, window) // one token per case in flight or buffered
 	jobs := make(chan job)
 	results := make(chan done, window)
