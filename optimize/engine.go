@@ -28,6 +28,9 @@ type Engine struct {
 	Progress func(done int)
 }
 
+// windowPerWorker is the reorder window per worker (see Engine).
+const windowPerWorker = 32
+
 type job struct {
 	seq int
 	c   grids.Case
@@ -48,7 +51,7 @@ func (e *Engine) Run(ctx context.Context, cases iter.Seq[grids.Case], emit func(
 	if workers <= 0 {
 		workers = runtime.NumCPU()
 	}
-	window := 32 * workers
+	window := windowPerWorker * workers
 	slots := make(chan struct{}, window) // one token per case in flight or buffered
 	jobs := make(chan job)
 	results := make(chan done, window)

@@ -80,8 +80,8 @@ func TestEngineCancelEmitsPrefix(t *testing.T) {
 	if !errors.Is(err, context.Canceled) {
 		t.Fatalf("got error %v, want context.Canceled", err)
 	}
-	if len(got) < 50 || len(got) > 50+2*3 {
-		t.Fatalf("got %d results after cancelling at 50, want 50 to %d", len(got), 50+2*3)
+	if w := windowPerWorker * 3; len(got) < 50 || len(got) > 50+w {
+		t.Fatalf("got %d results after cancelling at 50, want 50 to %d", len(got), 50+w)
 	}
 	for i, idx := range got {
 		if idx != i {

@@ -11,18 +11,31 @@ import (
 	"testing"
 
 	"github.com/spansweep/spansweep/grids"
+	"github.com/spansweep/spansweep/optimize"
 )
 
 // interruptAfter makes the next sweep receive a real SIGINT once rows rows
 // are written, as Ctrl-C would; the hook waits until the sweep has seen it.
+// Cases from rows+3 on wait for the signal before they are designed, so the
+// workers (which may run up to the engine's window ahead of the rows
+// written) cannot finish the grid first.
 func interruptAfter(t *testing.T, rows int) {
 	t.Helper()
 	var once sync.Once
+	signalled := make(chan struct{})
+	design := designCase
+	designCase = func(c grids.Case, s *optimize.Settings) optimize.Result {
+		if c.Index >= rows+3 {
+			<-signalled
+		}
+		return design(c, s)
+	}
 	sweepCaseHook = func(ctx context.Context, n int) {
 		if n < rows {
 			return
 		}
 		once.Do(func() {
+			defer close(signalled)
 			if err := syscall.Kill(os.Getpid(), syscall.SIGINT); err != nil {
 				t.Errorf("send SIGINT: %v", err)
 				return
@@ -30,7 +43,7 @@ func interruptAfter(t *testing.T, rows int) {
 			<-ctx.Done()
 		})
 	}
-	t.Cleanup(func() { sweepCaseHook = nil })
+	t.Cleanup(func() { sweepCaseHook, designCase = nil, design })
 }
 
 // An interrupted run keeps its finished cases, says how to resume and exits
@@ -66,7 +79,7 @@ func TestSweepInterruptThenResume(t *testing.T) {
 	sameRows(t, "resumed against uninterrupted", f.rows("out"), f.rows("straight"))
 	sameFiles(t, "resumed against uninterrupted", f.derivedFiles("out"), f.derivedFiles("straight"))
 	s := f.summary("out/summary.json")
-	// The hook fires at 5 rows; the engine then finishes up to 2×workers in flight.
+	// The hook fires at 5 rows; the engine then finishes the cases in flight.
 	if s.ResumedCases < 5 || s.ResumedCases >= sweepGridCases || s.ResumedCases+s.DesignedCases != sweepGridCases {
 		t.Errorf("resumed summary: got %d resumed + %d designed, want 5 to %d resumed, %d in all",
 			s.ResumedCases, s.DesignedCases, sweepGridCases-1, sweepGridCases)
