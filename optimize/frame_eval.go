@@ -91,7 +91,7 @@ func orDefault(v, d float64) float64 {
 func (m *frameModel) evaluate(cd *frameCandidate, t *frameTopology, full bool) (frameOutcome, error) {
 	var o frameOutcome
 	t.setSections(*cd.rafter, *cd.column)
-	if err := m.solve(t); err != nil {
+	if err := m.screen(t); err != nil {
 		return o, err
 	}
 	o.knee = t.knee
@@ -100,6 +100,9 @@ func (m *frameModel) evaluate(cd *frameCandidate, t *frameTopology, full bool) (
 	if o.util > 1 && !full {
 		o.stage = "serviceability"
 		return o, nil
+	}
+	if err := m.complete(); err != nil {
+		return o, err
 	}
 	m.tabulate()
 	rs, cs := m.specs(cd)

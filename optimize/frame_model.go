@@ -180,6 +180,22 @@ func (m *frameModel) solve(t *frameTopology) error {
 	return nil
 }
 
+// screen analyses topology t as far as its displacements (one analysis):
+// enough for the serviceability checks, which most failing candidates
+// fail. complete recovers the forces when the candidate goes on.
+func (m *frameModel) screen(t *frameTopology) error {
+	m.d.r.Analyses++
+	sol, err := m.ws.SolveDisplacements(&t.p.Frame, t.cases)
+	if err != nil {
+		return err
+	}
+	m.top, m.sol = t, sol
+	return nil
+}
+
+// complete finishes a screen's solve (analysis.Solution.Complete).
+func (m *frameModel) complete() error { return m.sol.Complete() }
+
 // tabulate fills each primary case's forces at the stations, every
 // combination's sums, and the buckling elements' axial forces.
 func (m *frameModel) tabulate() {

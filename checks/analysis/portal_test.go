@@ -150,3 +150,49 @@ func kneePortal(base Base) *Portal {
 	}
 	return p
 }
+
+// TestSolveDisplacementsIsSolvesFirstHalf checks that SolveDisplacements
+// gives exactly Solve's displacements (the values checked against CalculiX
+// in ccx_portal_test.go) before Complete, and after Complete exactly its
+// reactions and member forces, on a knee- and apex-braced portal under
+// gravity and a sideways case.
+func TestSolveDisplacementsIsSolvesFirstHalf(t *testing.T) {
+	p := kneePortal(PinnedBase)
+	g := LoadCase{Name: "G", SelfWeight: 1}
+	p.RoofGravity(&g, 0, p.Spec.SpanMM, 0.5)
+	w := LoadCase{Name: "W"}
+	p.WallPressure(&w, Left, 0, p.Spec.EavesHeightMM, 0.9)
+	p.RoofPressure(&w, 0, p.Spec.SpanMM, -0.7)
+	cases := []LoadCase{g, w}
+	var full, half Workspace
+	want, err := full.Solve(&p.Frame, cases)
+	if err != nil {
+		t.Fatal(err)
+	}
+	got, err := half.SolveDisplacements(&p.Frame, cases)
+	if err != nil {
+		t.Fatal(err)
+	}
+	comb := Combination{{Case: 0, Factor: 1.2}, {Case: 1, Factor: 1}}
+	for n := range p.Frame.Nodes {
+		if a, b := got.Displacement(comb, n), want.Displacement(comb, n); a != b {
+			t.Errorf("node %d displacement: SolveDisplacements %v, Solve %v", n, a, b)
+		}
+	}
+	if err := got.Complete(); err != nil {
+		t.Fatal(err)
+	}
+	for _, n := range p.Bases {
+		if a, b := got.Reaction(comb, n), want.Reaction(comb, n); a != b {
+			t.Errorf("base %d reaction after Complete: %v, Solve %v", n, a, b)
+		}
+	}
+	for m := range p.Frame.Members {
+		if a, b := got.EndForces(comb, m), want.EndForces(comb, m); a != b {
+			t.Errorf("member %d end forces after Complete: %v, Solve %v", m, a, b)
+		}
+	}
+	if err := want.Complete(); err != nil {
+		t.Errorf("Complete on a full Solve: %v, want nil", err)
+	}
+}

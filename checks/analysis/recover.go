@@ -7,13 +7,10 @@ import (
 	"gonum.org/v1/gonum/blas/blas64"
 )
 
-// recover fills displacements, member end forces and reactions of every case.
-func (w *Workspace) recover(cases []LoadCase) {
-	f := w.frame
+// recoverDisplacements copies every case's solved unknowns into w.disp.
+func (w *Workspace) recoverDisplacements() {
 	nd := 3 * w.nn
 	w.disp = grow(w.disp, w.nc*nd)
-	w.react = grow(w.react, w.nc*nd)
-	w.endF = grow(w.endF, w.nc*w.nm)
 	var x blas64.General
 	if w.n > 0 {
 		x = w.x.RawMatrix()
@@ -25,6 +22,18 @@ func (w *Workspace) recover(cases []LoadCase) {
 				d[i] = x.Data[e*x.Stride+c]
 			}
 		}
+	}
+}
+
+// recoverForces computes every case's member end forces and reactions from
+// w.disp.
+func (w *Workspace) recoverForces(cases []LoadCase) {
+	f := w.frame
+	nd := 3 * w.nn
+	w.react = grow(w.react, w.nc*nd)
+	w.endF = grow(w.endF, w.nc*w.nm)
+	for c := range w.nc {
+		d := w.disp[c*nd : (c+1)*nd]
 		r := w.react[c*nd : (c+1)*nd]
 		for m := range f.Members {
 			if !w.active[m] {

@@ -17,6 +17,9 @@ func Primary(i int) Combination { return Combination{{Case: i, Factor: 1}} }
 // Solution holds the results of a Solve. It belongs to its Workspace.
 type Solution struct {
 	w *Workspace
+	// pending holds the cases of a SolveDisplacements whose forces are not
+	// yet recovered (Complete); nil once complete.
+	pending []LoadCase
 }
 
 // Cases returns the number of primary cases.

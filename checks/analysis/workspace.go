@@ -52,6 +52,8 @@ type Workspace struct {
 	sol  Solution
 	brk  []float64
 	one  [1]LoadCase
+
+	factorErr error // the last solveDisplacements' assembly or factor error
 }
 
 // Solve analyses frame f under the primary load cases. The returned Solution belongs to the
@@ -99,9 +101,52 @@ func (w *Workspace) setup(f *Frame, nc int) {
 
 // solve numbers the unknowns, assembles, factors and solves all cases, then checks itself.
 func (w *Workspace) solve(cases []LoadCase) (*Solution, error) {
-	w.number()
-	if err := w.assembleAndFactor(); err != nil {
+	w.solveDisplacements(cases)
+	if err := w.factorErr; err != nil {
 		return nil, err
+	}
+	return w.complete(cases)
+}
+
+// SolveDisplacements is the first half of Solve: it analyses frame f under
+// the primary load cases as far as the nodal displacements, skipping the
+// member forces, reactions and self-check. Displacement then gives exactly
+// Solve's values (the same assembly, factor and load vectors); Complete
+// finishes the solve. It serves screens that reject most candidates on a
+// deflection alone. The Solution belongs to the workspace as Solve's does.
+func (w *Workspace) SolveDisplacements(f *Frame, cases []LoadCase) (*Solution, error) {
+	if err := validate(f, cases); err != nil {
+		return nil, err
+	}
+	w.setup(f, len(cases))
+	for i := range w.active {
+		w.active[i] = true
+	}
+	w.solveDisplacements(cases)
+	if err := w.factorErr; err != nil {
+		return nil, err
+	}
+	w.sol = Solution{w: w, pending: cases}
+	return &w.sol, nil
+}
+
+// Complete recovers the member forces and reactions of a Solution from
+// SolveDisplacements and runs Solve's self-check; on a Solution from Solve
+// it does nothing. After an error the Solution must not be used.
+func (s *Solution) Complete() error {
+	if s.pending == nil {
+		return nil
+	}
+	_, err := s.w.complete(s.pending)
+	return err
+}
+
+// solveDisplacements numbers, assembles, factors (an error is left in
+// w.factorErr) and solves every case for the nodal displacements.
+func (w *Workspace) solveDisplacements(cases []LoadCase) {
+	w.number()
+	if w.factorErr = w.assembleAndFactor(); w.factorErr != nil {
+		return
 	}
 	w.compileLoads(cases)
 	w.loadVectors(cases)
@@ -109,7 +154,12 @@ func (w *Workspace) solve(cases []LoadCase) (*Solution, error) {
 		w.x.Copy(w.rhs)
 		lapack64.Potrs(w.u, w.x.RawMatrix())
 	}
-	w.recover(cases)
+	w.recoverDisplacements()
+}
+
+// complete recovers forces and reactions and checks the solve.
+func (w *Workspace) complete(cases []LoadCase) (*Solution, error) {
+	w.recoverForces(cases)
 	w.residuals()
 	for c := range w.nc {
 		res, bal := w.res[c], w.balance(cases, c)
