@@ -265,10 +265,17 @@ func flangeIndex(outer bool) int {
 }
 
 // kept returns cs with its own copy of the check list (worstSegment's is
-// in a reused buffer).
-func (cs checkedSegment) kept() checkedSegment {
-	if cs.res.Checks != nil {
+// in a reused buffer): the whole list when all is set (a member's
+// governing segment, and every segment of a recorded calculation), else
+// the governing check alone, which is all the other segments' utilisations
+// and verdicts read.
+func (cs checkedSegment) kept(all bool) checkedSegment {
+	switch {
+	case cs.res.Checks == nil:
+	case all:
 		cs.res.Checks = slices.Clone(cs.res.Checks)
+	default:
+		cs.res.Checks = []coldformed.Check{cs.res.Governing()}
 	}
 	return cs
 }
