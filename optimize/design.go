@@ -4,6 +4,7 @@ import (
 	"fmt"
 
 	"github.com/spansweep/spansweep/catalog"
+	"github.com/spansweep/spansweep/checks/coldformed"
 	"github.com/spansweep/spansweep/grids"
 )
 
@@ -80,6 +81,9 @@ type designer struct {
 	// What earlier steps chose, for the later ones.
 	purlin, girt lineChoice
 	frm          frameChoice
+	// checkBuf is the reused check list of member checks whose results are
+	// read at once and not kept (CheckPurlinInto, CheckBeamColumnInto).
+	checkBuf []coldformed.Check
 	// The bracing bays' solves and the layout they are for (solveBracing).
 	braceSolves []bracingSolve
 	braceLayout bracingLayout

@@ -131,16 +131,19 @@ func (d *designer) checkMullion(e endWallLayout, sec catalog.Section, girtSpacin
 		}
 		m := coldformed.BeamColumn{Compression: coldformed.EffectiveLengths{Lex: H, Ley: sg, Lez: sg},
 			Bending: coldformed.Segment{Length: seg}}
-		res, err := coldformed.CheckBeamColumn(caps, m, coldformed.BeamColumnActions{N: a.axialN, Mx: a.wNmm * H * H / 8,
+		res, err := coldformed.CheckBeamColumnInto(d.checkBuf, caps, m, coldformed.BeamColumnActions{N: a.axialN, Mx: a.wNmm * H * H / 8,
 			V: math.Abs(a.wNmm) * H / 2})
 		if err != nil {
 			v.governing = Governing{Check: err.Error(), Utilisation: math.Inf(1)}
 			return v
 		}
+		d.checkBuf = res.Checks
 		res.SetCombination(a.name)
 		var lines []CheckLine
-		for _, c := range res.Checks {
-			lines = append(lines, checkLineOf("end-wall column "+sec.Designation, c))
+		if keep {
+			for _, c := range res.Checks {
+				lines = append(lines, checkLineOf("end-wall column "+sec.Designation, c))
+			}
 		}
 		take(governingOf(res.Governing()), lines...)
 	}
@@ -149,7 +152,7 @@ func (d *designer) checkMullion(e endWallLayout, sec catalog.Section, girtSpacin
 
 // mullionSections are the C and back-to-back C sections, lightest first.
 func (d *designer) mullionSections() []catalog.Section {
-	out := append(d.cat.ByShape(catalog.ShapeC), d.cat.ByShape(catalog.Shape2C)...)
+	out := append(d.byShape(catalog.ShapeC), d.byShape(catalog.Shape2C)...)
 	slices.SortStableFunc(out, func(a, b catalog.Section) int { return cmpFloat(a.MassKgPerM, b.MassKgPerM) })
 	return out
 }

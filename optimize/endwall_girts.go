@@ -79,15 +79,18 @@ func (d *designer) checkEndWallGirt(sec catalog.Section, spanM, spacingM float64
 		} else {
 			act.FreeFlangeMoment, act.Outward = m, true
 		}
-		res, err := coldformed.CheckPurlin(caps, member, act)
+		res, err := coldformed.CheckPurlinInto(d.checkBuf, caps, member, act)
 		if err != nil {
 			v.governing = Governing{Check: err.Error(), Utilisation: math.Inf(1)}
 			return v
 		}
+		d.checkBuf = res.Checks
 		res.SetCombination(a.name)
 		var lines []CheckLine
-		for _, c := range res.Checks {
-			lines = append(lines, checkLineOf(name, c))
+		if keep {
+			for _, c := range res.Checks {
+				lines = append(lines, checkLineOf(name, c))
+			}
 		}
 		take(governingOf(res.Governing()), lines...)
 	}

@@ -73,7 +73,7 @@ func (d *designer) newFrameModel() (*frameModel, error) {
 		}
 	}
 	m.order = slices.Clone(m.uls)
-	cs := d.cat.ByShape(catalog.ShapeC)
+	cs := d.byShape(catalog.ShapeC)
 	if len(cs) == 0 {
 		return nil, fmt.Errorf("catalogue %s has no C section for knee and fly braces", d.cat.Name)
 	}
@@ -109,7 +109,7 @@ func (m *frameModel) candidates() []frameCandidate {
 	var secs []catalog.Section
 	var caps []*coldformed.Capacities
 	for _, s := range frameShapes(m.d.c.Options.Members.FrameFamilies) {
-		for _, sec := range m.d.cat.ByShape(s) {
+		for _, sec := range m.d.byShape(s) {
 			if c, err := m.caps.of(sec); err == nil {
 				secs, caps = append(secs, sec), append(caps, c)
 			}

@@ -184,7 +184,7 @@ func (m *frameModel) mechanismRatio(gl gravityLoad, xb float64, cd *frameCandida
 // heaviestOf returns the heaviest section of a shape (for conservative
 // brace weights in bounds).
 func heaviestOf(cat *catalog.Catalogue, s catalog.Shape) catalog.Section {
-	list := cat.ByShape(s)
+	list := capacitiesFor(cat).byShape(s)
 	if len(list) == 0 {
 		return catalog.Section{}
 	}

@@ -110,7 +110,7 @@ func (m *frameModel) kneeBraceForces() (comp, tens float64) {
 // a pin-ended strut (AS/NZS 4600:2018 cl. 3.4, l_e = brace length on
 // every axis) and tie (cl. 3.2), with its utilisation; ok false if none.
 func (m *frameModel) kneeBraceSection(lengthMM, comp, tens float64) (catalog.Section, float64, bool) {
-	for _, s := range m.d.cat.ByShape(catalog.ShapeC) {
+	for _, s := range m.d.byShape(catalog.ShapeC) {
 		c, err := m.caps.of(s)
 		if err != nil {
 			continue

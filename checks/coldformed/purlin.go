@@ -128,6 +128,14 @@ func RFactor(sec *catalog.Section, span float64, st SpanType) float64 {
 // CheckPurlin checks a purlin or girt with one flange through-fastened under
 // one combination's actions.
 func CheckPurlin(c *Capacities, p Purlin, a PurlinActions) (MemberResult, error) {
+	return CheckPurlinInto(make([]Check, 0, 9), c, p, a)
+}
+
+// CheckPurlinInto is CheckPurlin with the result's checks stored in buf's
+// storage (from buf[:0], growing it if needed), for searches that check
+// many candidates and keep few results: the result is valid until buf is
+// reused. The checks are the same as CheckPurlin's.
+func CheckPurlinInto(buf []Check, c *Capacities, p Purlin, a PurlinActions) (MemberResult, error) {
 	r := MemberResult{Designation: c.Section.Designation}
 	var v validator
 	if !isFlexural(c.Section.Shape) {
@@ -138,7 +146,7 @@ func CheckPurlin(c *Capacities, p Purlin, a PurlinActions) (MemberResult, error)
 	if err := v.err(); err != nil {
 		return r, fmt.Errorf("purlin %s: %w", c.Section.Designation, err)
 	}
-	r.Checks = make([]Check, 0, 9)
+	r.Checks = buf[:0]
 	// Fastened (top) flange in compression: restrained by the sheeting, so
 	// section capacity (cl. 3.3.2) and distortional buckling (cl. 3.3.3.3).
 	r.Checks = append(r.Checks, c.sectionMomentCheck(a.FastenedFlangeMoment, true),

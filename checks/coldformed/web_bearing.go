@@ -82,11 +82,11 @@ func (c *Capacities) webBearingCheck(rStar float64, b Bearing) (Check, error) {
 	if err != nil {
 		return Check{}, err
 	}
-	where := "end"
+	name := "web bearing, end"
 	if b.Interior {
-		where = "interior"
+		name = "web bearing, interior"
 	}
-	return newCheck("3.3.6", "web bearing, "+where, LimitStrength, rStar, cap, "N",
+	return newCheck("3.3.6", name, LimitStrength, rStar, cap, "N",
 		Input{InLb, b.Length}, Input{InD1, c.WebFlat}), nil
 }
 
