@@ -66,8 +66,15 @@ func smallestPassing(b Base, o Options) (pad, bool) {
 	var best pad
 	found := false
 	for _, d := range steps(o.MinDepthM, o.MaxDepthM, o.DepthStepM) {
-		i := sort.Search(len(widths), func(i int) bool { return pad{b: widths[i], d: d, o: &o}.passes(b) })
-		if i == len(widths) {
+		// Depths come shallowest first, so at this depth only a pad of
+		// less volume than the best so far can replace it: search those
+		// widths alone.
+		n := len(widths)
+		if found {
+			n = sort.Search(n, func(i int) bool { return !(pad{b: widths[i], d: d, o: &o}.volume() < best.volume()) })
+		}
+		i := sort.Search(n, func(i int) bool { return pad{b: widths[i], d: d, o: &o}.passes(b) })
+		if i == n {
 			continue
 		}
 		p := pad{b: widths[i], d: d, o: &o}
