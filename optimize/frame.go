@@ -42,6 +42,10 @@ func (d *designer) frame() bool {
 		return false
 	}
 	spent := d.r.Analyses
+	if err := m.prepareBounds(); err != nil {
+		d.fail(RoleRafter, fmt.Sprintf("frame model: %v", err))
+		return false
+	}
 	best, ok, err := m.search(cands)
 	if err != nil {
 		d.fail(RoleRafter, fmt.Sprintf("frame analysis: %v", err))
@@ -79,13 +83,19 @@ func (d *designer) newFrameModel() (*frameModel, error) {
 	}
 	m.brace0, m.heaviestC = cs[0], cs[len(cs)-1]
 	var err error
-	if m.plain, err = m.newTopology(nil, cs[0], cs[0]); err != nil {
-		return m, err
-	}
-	if m.g.pitchRad > 1e-3 && (d.s == nil || !d.s.Exhaustive) {
-		m.mech, err = m.newMechanisms()
-	}
+	m.plain, err = m.newTopology(nil, cs[0], cs[0])
 	return m, err
+}
+
+// prepareBounds builds the statics bounds' mechanisms (one analysis) for
+// a pitched roof, unless the search is exhaustive.
+func (m *frameModel) prepareBounds() error {
+	if m.g.pitchRad <= 1e-3 || (m.d.s != nil && m.d.s.Exhaustive) {
+		return nil
+	}
+	var err error
+	m.mech, err = m.newMechanisms()
+	return err
 }
 
 // frameShapes are the catalogue shapes of the grid's frame families.
