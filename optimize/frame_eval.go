@@ -142,19 +142,34 @@ func (m *frameModel) evaluate(cd *frameCandidate, t *frameTopology, full bool) (
 	return o, nil
 }
 
-// members checks the rafter and column and folds them into o.
+// members checks the rafter and column and folds them into o. For a
+// verdict (record unset) it stops at the first member that fails, trying
+// first the member that failed the last candidate (m.columnFirst): the
+// other's utilisation is then left at 0, a lower bound like every
+// utilisation of a failing verdict.
 func (m *frameModel) members(o *frameOutcome, rs, cs *memberSpec, l *lambdas, record bool) (bool, error) {
-	r, err := m.evaluateMember(rs, l, flyGreedy, nil, record, stopUnless(record))
-	if err != nil {
-		return false, err
+	specs, outs := [2]*memberSpec{rs, cs}, [2]*memberOutcome{&o.rafter, &o.column}
+	if m.columnFirst && !record {
+		specs[0], specs[1], outs[0], outs[1] = cs, rs, &o.column, &o.rafter
 	}
-	c, err := m.evaluateMember(cs, l, flyGreedy, nil, record, stopUnless(record))
-	if err != nil {
-		return false, err
+	*outs[0], *outs[1] = memberOutcome{}, memberOutcome{}
+	pass := true
+	for i := range specs {
+		mo, err := m.evaluateMember(specs[i], l, flyGreedy, nil, record, stopUnless(record))
+		if err != nil {
+			return false, err
+		}
+		*outs[i] = mo
+		if !mo.pass {
+			pass = false
+			if !record {
+				m.columnFirst = specs[i] == cs
+				break
+			}
+		}
 	}
-	o.rafter, o.column = r, c
-	o.util = math.Max(math.Max(o.drift.ratio, o.apex.ratio), math.Max(r.util, c.util))
-	return r.pass && c.pass, nil
+	o.util = math.Max(math.Max(o.drift.ratio, o.apex.ratio), math.Max(o.rafter.util, o.column.util))
+	return pass, nil
 }
 
 // exactGoverning makes each member's reported governing check exact: λc

@@ -59,6 +59,9 @@ type frameModel struct {
 	columnLey float64                            // the columns' l_ey (girt spacing), the same for every section
 	phiNBound map[*coldformed.Capacities]float64 // boundPasses' φN_c with l_ex → 0 per column section
 	kneeStart *frameTopology                     // the knee-braced portal at the start of the placement search
+	// columnFirst checks the column before the rafter in a verdict: the
+	// column failed the last candidate that failed.
+	columnFirst bool
 	// fast selects fastUtilisation where it applies (λc = ∞ stages, no
 	// recording): it gives utilisations only, no check lists.
 	fast bool
