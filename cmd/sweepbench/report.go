@@ -52,6 +52,9 @@ func (r *report) writeText(w io.Writer) {
 		line("cases timed", "%d of the grid's %d (evenly spaced)", r.Cases, r.GridCases)
 		if r.Memo {
 			line("memo", "on: sub-searches with inputs equal to an earlier case's replayed, as sweep runs")
+			m := r.Design.Memo
+			line("memo: frames replayed", "%d of %d", m.FrameHits, m.FrameHits+m.FrameMisses)
+			line("memo: pad designs replayed", "%d of %d", m.FootingHits, m.FootingHits+m.FootingMisses)
 		} else {
 			line("memo", "off: every search run in full")
 		}

@@ -31,9 +31,11 @@ type caseTimes struct {
 // designState records what Design returned over the grid, so a figure can
 // be read against the state of the design code when it was measured.
 type designState struct {
-	OK         int            `json:"ok"`
-	NoSolution int            `json:"no_solution"`
-	FailedAt   map[string]int `json:"failed_at"` // no-solution cases by the member group named first in the reason
+	OK         int `json:"ok"`
+	NoSolution int `json:"no_solution"`
+	// Memo counts the memo's look-ups (zero without --memo).
+	Memo     optimize.MemoStats `json:"memo"`
+	FailedAt map[string]int     `json:"failed_at"` // no-solution cases by the member group named first in the reason
 }
 
 // timeCases designs cases through the engine with the given worker count,
@@ -68,6 +70,9 @@ func timeCases(cases []grids.Case, cat *catalog.Catalogue, workers int, memo boo
 		return nil
 	})
 	wall := time.Since(start)
+	if settings.Memo != nil {
+		state.Memo = settings.Memo.Stats()
+	}
 	return workerRun{Workers: workers, Cases: len(times), WallS: wall.Seconds(),
 		CasesPerS: float64(len(times)) / wall.Seconds()}, times, state
 }
