@@ -23,6 +23,7 @@ import (
 // boundPasses. With Settings.Exhaustive every candidate is evaluated.
 func (d *designer) frame() bool {
 	m, err := d.newFrameModel()
+	defer m.release()
 	if err != nil {
 		d.fail(RoleRafter, fmt.Sprintf("frame model: %v", err))
 		return false
@@ -60,7 +61,8 @@ func (d *designer) frame() bool {
 
 // newFrameModel prepares the frame search of the designer's case.
 func (d *designer) newFrameModel() (*frameModel, error) {
-	m := &frameModel{d: d, g: d.newFrameGeometry(), combs: d.combinations(), caps: capacitiesFor(d.cat)}
+	m := &frameModel{d: d, g: d.newFrameGeometry(), combs: d.combinations(), caps: capacitiesFor(d.cat),
+		ws: workspaces.Get().(*analysis.Workspace)}
 	for i := range d.act.Primaries {
 		m.prim = append(m.prim, analysis.Primary(i))
 	}
@@ -226,7 +228,7 @@ type searchResult struct {
 // evaluated only when its pair fails without braces.
 func (m *frameModel) search(cands []frameCandidate) (searchResult, bool, error) {
 	exhaustive := m.d.s != nil && m.d.s.Exhaustive
-	failed := map[int]bool{} // pairs that fail unbraced
+	failed := make([]bool, len(cands)+1) // by pair (numbered from 1): fails unbraced
 	var best, bestFail searchResult
 	found := false
 	bestFail.ratio = math.Inf(1)

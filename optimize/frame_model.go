@@ -3,6 +3,7 @@ package optimize
 import (
 	"math"
 	"slices"
+	"sync"
 
 	"github.com/spansweep/spansweep/catalog"
 	"github.com/spansweep/spansweep/checks/analysis"
@@ -39,7 +40,7 @@ type frameTopology struct {
 type frameModel struct {
 	d         *designer
 	g         frameGeometry
-	ws        analysis.Workspace
+	ws        *analysis.Workspace // from workspaces; frame returns it
 	combs     []analysis.Combination
 	prim      []analysis.Combination // each primary alone
 	uls       []int                  // indices of ULS combinations
@@ -77,6 +78,20 @@ type frameModel struct {
 	// checkBuf holds the inner- and outer-flange check lists of the last
 	// segment checks (worstSegment, innerPasses), reused between them.
 	checkBuf [2][]coldformed.Check
+}
+
+// workspaces recycles frame analysis workspaces between cases, so that
+// each worker's solves reuse buffers sized for these frames instead of
+// allocating them per case.
+var workspaces = sync.Pool{New: func() any { return new(analysis.Workspace) }}
+
+// release returns the model's workspace for another case; the model's
+// solution must not be used after it.
+func (m *frameModel) release() {
+	if m != nil && m.ws != nil {
+		workspaces.Put(m.ws)
+		m.ws, m.sol = nil, nil
+	}
 }
 
 // newTopology builds the portal for knee brace kb (nil: none).

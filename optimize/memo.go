@@ -196,7 +196,7 @@ func (k *keyWriter) fs(vs []float64) {
 // restraint lines and base, its load cases and combinations, and the grid's
 // frame options and limits. The catalogue is the Memo's own (Settings).
 func (m *frameModel) frameKey() memoKey {
-	var k keyWriter
+	k := keyWriter{b: make([]byte, 0, 8192)}
 	c := m.d.c
 	g := &m.g
 	k.s(c.Base)
