@@ -26,14 +26,21 @@ type Engine struct {
 	// Progress, if set, is called from the emitting goroutine after each
 	// result is emitted, with the count emitted so far.
 	Progress func(done int)
+	// Chunk is the number of consecutive cases one worker designs in a
+	// row; 0 means 1. Neighbouring cases of a grid often share sub-problems
+	// (the frame of every bay count, through a Memo): one worker solving
+	// them in turn replays what it found, where workers taking one case
+	// each would search the same problem side by side. At most 32 cases
+	// per worker.
+	Chunk int
 }
 
 // windowPerWorker is the reorder window per worker (see Engine).
 const windowPerWorker = 32
 
 type job struct {
-	seq int
-	c   grids.Case
+	seq   int // of cases[0]
+	cases []grids.Case
 }
 
 type done struct {
@@ -58,9 +65,18 @@ func (e *Engine) Run(ctx context.Context, cases iter.Seq[grids.Case], emit func(
 
 	var g errgroup.Group
 	stop := make(chan struct{}) // closed when emitting fails
+	chunk := min(max(e.Chunk, 1), windowPerWorker)
 	g.Go(func() error {
 		defer close(jobs)
 		seq := 0
+		var batch []grids.Case
+		send := func() {
+			if len(batch) > 0 {
+				jobs <- job{seq - len(batch), batch}
+				batch = nil
+			}
+		}
+		defer send() // a batch already holding slots is designed, even when stopping
 		for c := range cases {
 			select {
 			case slots <- struct{}{}:
@@ -69,15 +85,20 @@ func (e *Engine) Run(ctx context.Context, cases iter.Seq[grids.Case], emit func(
 			case <-stop:
 				return nil
 			}
-			jobs <- job{seq, c}
+			batch = append(batch, c)
 			seq++
+			if len(batch) == chunk {
+				send()
+			}
 		}
 		return nil
 	})
 	for range workers {
 		g.Go(func() error {
 			for j := range jobs {
-				results <- done{j.seq, e.Design(j.c)}
+				for i, c := range j.cases {
+					results <- done{j.seq + i, e.Design(c)}
+				}
 			}
 			return nil
 		})

@@ -66,9 +66,15 @@ func TestEngineOrderIndependentOfWorkers(t *testing.T) {
 // Cancelling stops taking cases but emits every case already taken, as an
 // unbroken prefix of the input.
 func TestEngineCancelEmitsPrefix(t *testing.T) {
+	for _, chunk := range []int{1, 8} {
+		cancelEmitsPrefix(t, chunk)
+	}
+}
+
+func cancelEmitsPrefix(t *testing.T, chunk int) {
 	ctx, cancel := context.WithCancel(context.Background())
 	defer cancel()
-	e := Engine{Workers: 3, Design: jitterDesign}
+	e := Engine{Workers: 3, Design: jitterDesign, Chunk: chunk}
 	var got []int
 	err := e.Run(ctx, numberedCases(100000), func(r Result) error {
 		got = append(got, r.Case.Index)
@@ -107,5 +113,33 @@ func TestEngineEmitErrorStops(t *testing.T) {
 	}
 	if count != 10 {
 		t.Fatalf("emit called %d times, want 10", count)
+	}
+}
+
+// Chunks of consecutive cases go to one worker each, and the results still
+// come out in input order, every case once, for chunk sizes that divide the
+// input and that do not, and one larger than the window allows.
+func TestEngineChunksKeepOrder(t *testing.T) {
+	const n = 333
+	for _, chunk := range []int{2, 8, 7, 1000} {
+		for _, workers := range []int{1, 3} {
+			e := Engine{Workers: workers, Design: jitterDesign, Chunk: chunk}
+			var got []int
+			err := e.Run(context.Background(), numberedCases(n), func(r Result) error {
+				got = append(got, r.Case.Index)
+				return nil
+			})
+			if err != nil {
+				t.Fatalf("chunk %d, %d workers: %v", chunk, workers, err)
+			}
+			if len(got) != n {
+				t.Fatalf("chunk %d, %d workers: %d results, want %d", chunk, workers, len(got), n)
+			}
+			for i, idx := range got {
+				if idx != i {
+					t.Fatalf("chunk %d, %d workers: result %d is case %d", chunk, workers, i, idx)
+				}
+			}
+		}
 	}
 }

@@ -82,6 +82,12 @@ type runStats struct {
 	wall     time.Duration
 }
 
+// sweepChunk is the run of consecutive cases each worker designs in turn,
+// so that the cases sharing a memo entry (a frame's every bay count) are
+// mostly solved by one worker, one after another (optimize.Engine.Chunk).
+// A variable for the interrupt tests, which need cases left untaken.
+var sweepChunk = 16
+
 // design runs the engine over the shard's cases not yet in w and closes the
 // part. On a signal it keeps the finished cases as a partial part and
 // returns an error that says how to resume.
@@ -95,6 +101,7 @@ func (s *sweepRun) design(ctx context.Context, w *dataset.Writer, stderr io.Writ
 	settings := &optimize.Settings{Catalogue: s.cat, Memo: &optimize.Memo{}}
 	eng := optimize.Engine{
 		Workers: s.flags.workers,
+		Chunk:   sweepChunk,
 		Design:  func(c grids.Case) optimize.Result { return designCase(c, settings) },
 	}
 	var prog *progress

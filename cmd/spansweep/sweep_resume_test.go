@@ -23,7 +23,8 @@ func interruptAfter(t *testing.T, rows int) {
 	t.Helper()
 	var once sync.Once
 	signalled := make(chan struct{})
-	design := designCase
+	design, chunk := designCase, sweepChunk
+	sweepChunk = 1 // else the workers take every case of the small grid in two chunks
 	designCase = func(c grids.Case, s *optimize.Settings) optimize.Result {
 		if c.Index >= rows+3 {
 			<-signalled
@@ -43,7 +44,7 @@ func interruptAfter(t *testing.T, rows int) {
 			<-ctx.Done()
 		})
 	}
-	t.Cleanup(func() { sweepCaseHook, designCase = nil, design })
+	t.Cleanup(func() { sweepCaseHook, designCase, sweepChunk = nil, design, chunk })
 }
 
 // An interrupted run keeps its finished cases, says how to resume and exits

@@ -55,6 +55,7 @@ func timeCases(cases []grids.Case, cat *catalog.Catalogue, workers int, memo boo
 	var mu sync.Mutex
 	eng := optimize.Engine{
 		Workers: workers,
+		Chunk:   16, // as spansweep sweep
 		Design: func(c grids.Case) optimize.Result {
 			t0 := time.Now()
 			r := optimize.Design(c, settings)
