@@ -34,6 +34,15 @@ housing_classes = ["N2", "C1"]
 
 const killGridCases = 240
 
+// The rig's binary cuts the dataset into pieces of killPieceGroups row
+// groups of killGroupRows rows, so the kills land in the middle of pieces
+// and on their boundaries: 240 / 48 = 5 pieces, the last one full.
+const (
+	killGroupRows   = 24
+	killPieceGroups = 2
+	killPieces      = 5
+)
+
 // killCatalogue is the embedded catalogue's Z sections only. The test
 // exercises the sweep's files, not the design: with no C or 2C section the
 // frame step finds no candidate at once, so every case is a no_solution
@@ -65,7 +74,8 @@ func newKillRig(t *testing.T) *killRig {
 	t.Helper()
 	dir := t.TempDir()
 	r := &killRig{t: t, dir: dir, bin: filepath.Join(dir, "spansweep"), grid: filepath.Join(dir, "grid.toml"), cat: filepath.Join(dir, "z-only.csv")}
-	if out, err := exec.Command("go", "build", "-o", r.bin, ".").CombinedOutput(); err != nil {
+	layout := fmt.Sprintf("-X main.pieceLayout=%d/%d", killGroupRows, killPieceGroups)
+	if out, err := exec.Command("go", "build", "-ldflags", layout, "-o", r.bin, ".").CombinedOutput(); err != nil {
 		t.Fatalf("go build: %v\n%s", err, out)
 	}
 	if err := os.WriteFile(r.grid, []byte(killGridText), 0o644); err != nil {
@@ -179,10 +189,31 @@ func (r *killRig) checkResumed(out string) {
 	for _, e := range entries {
 		names = append(names, e.Name())
 	}
-	want := []string{partFileName(grids.Shard{K: 1, N: 1})}
+	var want []string
+	for p := 1; p <= killPieces; p++ {
+		want = append(want, dataset.PieceName(dataShard(grids.Shard{K: 1, N: 1}), p))
+	}
 	if !slices.Equal(names, want) {
 		r.t.Errorf("dataset directory after --resume holds %q, want only %q", names, want)
 	}
+}
+
+// partialPieces reads the partial pieces in out's dataset directory: file
+// name to content.
+func (r *killRig) partialPieces(out string) map[string][]byte {
+	r.t.Helper()
+	entries, _ := os.ReadDir(r.datasetDir(out))
+	kept := map[string][]byte{}
+	for _, e := range entries {
+		if f, ok := dataset.ParseFileName(e.Name()); ok && f.Partial {
+			b, err := os.ReadFile(filepath.Join(r.datasetDir(out), e.Name()))
+			if err != nil {
+				r.t.Fatal(err)
+			}
+			kept[e.Name()] = b
+		}
+	}
+	return kept
 }
 
 func (r *killRig) sameRows(what string, got []dataset.Row) {
@@ -233,28 +264,45 @@ func (r *killRig) killThenResume() {
 	r.t.Logf("%d of %d runs killed mid-run (uninterrupted run %v)", midRun, len(killDelays), r.took)
 }
 
-// killDuringResume interrupts a run with SIGINT so it keeps a partial part,
-// kills the resumed run with SIGKILL, and checks that the partial part
-// survived and a second --resume completes to the uninterrupted rows.
+// killDuringResume interrupts a run with SIGINT so it keeps partial
+// pieces, kills the resumed run with SIGKILL, and checks that no kept case
+// was lost: every piece but the last kept is unchanged (under its partial
+// name, or its final one if the resumed run got as far as renaming it), the
+// last is there (the resumed run may have completed it), and a second
+// --resume completes to the uninterrupted rows.
 func (r *killRig) killDuringResume() {
 	const out = "interrupted"
-	partial := filepath.Join(r.datasetDir(out), partialFileName(grids.Shard{K: 1, N: 1}))
+	var before map[string][]byte
 	for _, f := range killDelays {
 		if r.stop(out, time.Duration(f*float64(r.took)), os.Interrupt) {
-			if _, err := os.Stat(partial); err == nil {
+			if before = r.partialPieces(out); len(before) > 0 {
 				break
 			}
 		}
 		os.RemoveAll(filepath.Join(r.dir, out)) // finished first or kept nothing: try another delay
 	}
-	before, err := os.ReadFile(partial)
-	if err != nil {
-		r.t.Fatalf("no partial part after SIGINT at any of the delays %v of %v: %v", killDelays, r.took, err)
+	if len(before) == 0 {
+		r.t.Fatalf("no partial piece after SIGINT at any of the delays %v of %v", killDelays, r.took)
+	}
+	last := ""
+	for name := range before {
+		last = max(last, name)
 	}
 	if !r.stop(out, r.took/4, syscall.SIGKILL, "--resume") {
 		r.t.Logf("the resumed run finished before SIGKILL (uninterrupted run %v)", r.took)
-	} else if after, err := os.ReadFile(partial); err != nil || !slices.Equal(after, before) {
-		r.t.Errorf("SIGKILL during --resume changed or removed the partial part (err %v)", err)
+	} else {
+		for name, b := range before {
+			after, err := os.ReadFile(filepath.Join(r.datasetDir(out), name))
+			if errors.Is(err, fs.ErrNotExist) {
+				after, err = os.ReadFile(filepath.Join(r.datasetDir(out), strings.TrimPrefix(name, dataset.PartialPrefix)))
+			}
+			switch {
+			case err != nil:
+				r.t.Errorf("SIGKILL during --resume removed %s: %v", name, err)
+			case name != last && !slices.Equal(after, b):
+				r.t.Errorf("SIGKILL during --resume changed %s, a finished piece", name)
+			}
+		}
 	}
 	r.mustRun(out, "--resume")
 	r.checkResumed(out)

@@ -23,17 +23,20 @@ const sweepSynopsis = `Designs every case of a grid file (default: the embedded 
 range) with a section catalogue (default: the embedded RS series) and writes,
 under --out (default ./out):
 
-  dataset/part-KKKKK-of-NNNNN.parquet   one row per case (DuckDB, Arrow, Spark)
+  dataset/part-KKKKK-of-NNNNN-piece-PPPPP.parquet
+                                         one row per case (DuckDB, Arrow, Spark),
+                                         131,072 rows a piece
   tables/span-tables.{csv,md,html}       span tables (whole-grid runs only)
   plots/*.svg                            mass against span, governing checks
   summary.json                           counts, timing, trend fits, hashes
   shards/summary-KKKKK-of-NNNNN.json     instead, for a run with --shard K/N, N > 1
 
-Everything is validated before anything is written. An existing dataset part
+Everything is validated before anything is written. An existing dataset shard
 is never overwritten: finish or rebuild it with --resume, or choose another
 --out. Ctrl-C (or SIGTERM) stops taking cases, finishes those in flight and
-keeps every finished case; the same command with --resume continues, and the
-result equals an uninterrupted run. A sharded run (--shard K/N) writes only its
+keeps every finished case (in dataset/_partial-… pieces, which the
+part-*.parquet glob passes by); the same command with --resume continues,
+and the result equals an uninterrupted run. A sharded run (--shard K/N) writes only its
 dataset part; when every shard has finished, --tables-only reads all the parts
 and writes the tables, plots and summary.json.`
 

@@ -19,6 +19,24 @@ import (
 // however often a grid is swept).
 var designCase = optimize.Design
 
+// datasetOptions cut the dataset into row groups and pieces; empty (the
+// package defaults) but in tests, which make them small to cross piece
+// boundaries with few cases. A test binary of the command sets them at link
+// time through pieceLayout.
+var datasetOptions []dataset.Option
+
+// pieceLayout, set only by a test's build (-ldflags "-X
+// main.pieceLayout=ROWS/GROUPS"), is the rows per row group and row groups
+// per piece of the dataset.
+var pieceLayout string
+
+func init() {
+	var rows, groups int
+	if _, err := fmt.Sscanf(pieceLayout, "%d/%d", &rows, &groups); err == nil {
+		datasetOptions = []dataset.Option{dataset.GroupRows(rows), dataset.PieceGroups(groups)}
+	}
+}
+
 // sweepCaseHook, when set (by tests only), is called after each dataset
 // row is written with the run's context and the rows written so far.
 var sweepCaseHook func(ctx context.Context, rows int)
@@ -53,7 +71,7 @@ func (s *sweepRun) sweep(ctx context.Context, stdout, stderr io.Writer) error {
 func (s *sweepRun) openPart(stderr io.Writer) (*dataset.Writer, error) {
 	dir := s.layout.datasetDir()
 	if s.flags.resume {
-		w, err := dataset.Resume(dir, s.meta())
+		w, err := dataset.Resume(dir, s.meta(), datasetOptions...)
 		var mm *dataset.MismatchError
 		var ve *dataset.VersionError
 		switch {
@@ -68,7 +86,7 @@ func (s *sweepRun) openPart(stderr io.Writer) (*dataset.Writer, error) {
 			fmt.Fprintf(stderr, "spansweep sweep: --resume: no earlier run of shard %s in %s; starting afresh\n", s.shard, dir)
 		}
 	}
-	w, err := dataset.Create(dir, s.meta())
+	w, err := dataset.Create(dir, s.meta(), datasetOptions...)
 	if err != nil {
 		return nil, fmt.Errorf("dataset: %w", err)
 	}
@@ -80,6 +98,7 @@ type runStats struct {
 	resumed  int // rows carried over from an earlier run
 	designed int // cases designed by this run
 	wall     time.Duration
+	files    []string // the shard's dataset pieces
 }
 
 // sweepChunk is the run of consecutive cases each worker designs in turn,
@@ -133,6 +152,7 @@ func (s *sweepRun) design(ctx context.Context, w *dataset.Writer, stderr io.Writ
 	if err := w.Close(); err != nil {
 		return stats, fmt.Errorf("dataset: %w", err)
 	}
+	stats.files = w.Files()
 	return stats, nil
 }
 
@@ -148,9 +168,20 @@ func (s *sweepRun) stopped(ctx context.Context, w *dataset.Writer, total int, ca
 	if rows == 0 {
 		return fmt.Errorf("interrupted before any case finished; nothing was kept")
 	}
-	partial := filepath.Join(s.layout.datasetDir(), partialFileName(s.shard))
 	return fmt.Errorf("interrupted: %d of %d cases of shard %s finished and are kept in %s; run the same command with --resume to continue",
-		rows, total, s.shard, partial)
+		rows, total, s.shard, keptIn(w.Files()))
+}
+
+// keptIn names the files an interrupted run kept: the one, or the first and
+// last of several.
+func keptIn(files []string) string {
+	switch len(files) {
+	case 0:
+		return "no file"
+	case 1:
+		return files[0]
+	}
+	return fmt.Sprintf("%d pieces, %s to %s", len(files), files[0], filepath.Base(files[len(files)-1]))
 }
 
 // keptRows is what a resumed dataset part holds, as *dataset.Writer tells it.

@@ -6,9 +6,9 @@ import (
 	"io/fs"
 	"os"
 	"path/filepath"
-	"strings"
 
 	"github.com/spansweep/spansweep/grids"
+	"github.com/spansweep/spansweep/outputs/dataset"
 )
 
 // outLayout names the files of a sweep's output directory.
@@ -27,14 +27,8 @@ func (l outLayout) summaryPath(s grids.Shard) string {
 	return filepath.Join(l.root, "shards", fmt.Sprintf("summary-%05d-of-%05d.json", s.K, s.N))
 }
 
-// partFileName is a shard's dataset part, as outputs/dataset names it
-// (documented in its package doc; a test checks the two agree).
-func partFileName(s grids.Shard) string {
-	return fmt.Sprintf("part-%05d-of-%05d.parquet", s.K, s.N)
-}
-
-// partialFileName is the part an interrupted run leaves.
-func partialFileName(s grids.Shard) string { return partFileName(s) + ".partial" }
+// dataShard is the dataset package's name for a shard.
+func dataShard(s grids.Shard) dataset.Shard { return dataset.Shard{K: s.K, N: s.N} }
 
 // checkOutDir checks that the output directory can be written: it is a
 // directory, or it does not exist yet and its parent is one. It writes only
@@ -92,11 +86,11 @@ func checkNewFile(flag, path string) error {
 }
 
 // checkExisting applies the overwrite policy to the dataset directory:
-//   - parts of another shard count are never mixed in (a dataset holds one
+//   - pieces of another shard count are never mixed in (a dataset holds one
 //     sharding of one grid);
-//   - this shard's finished or interrupted part is kept unless --resume,
-//     which continues (or, for a finished part, re-reads) it;
-//   - other shards' parts of the same count belong to sibling jobs and are
+//   - this shard's finished or interrupted pieces are kept unless --resume,
+//     which continues (or, for a finished shard, re-reads) them;
+//   - other shards' pieces of the same count belong to sibling jobs and are
 //     left alone.
 func (l outLayout) checkExisting(s grids.Shard, resume bool) error {
 	entries, err := os.ReadDir(l.datasetDir())
@@ -106,30 +100,34 @@ func (l outLayout) checkExisting(s grids.Shard, resume bool) error {
 	if err != nil {
 		return usagef("--out %s: %v", l.root, err)
 	}
+	var finished, partial string // a piece of this shard of each kind
 	for _, e := range entries {
-		var k, n int
-		if _, err := fmt.Sscanf(e.Name(), "part-%05d-of-%05d.parquet", &k, &n); err != nil {
+		f, ok := dataset.ParseFileName(e.Name())
+		if !ok {
 			continue
 		}
-		if n != s.N {
+		if f.Shard.N != s.N {
 			return usagef("%s: a dataset sharded %d ways is already there and this run is shard %s; nothing was overwritten. Use the same N, another --out, or remove %s",
-				filepath.Join(l.datasetDir(), e.Name()), n, s, l.datasetDir())
+				filepath.Join(l.datasetDir(), e.Name()), f.Shard.N, s, l.datasetDir())
+		}
+		switch {
+		case f.Shard.K != s.K:
+		case f.Partial && partial == "":
+			partial = e.Name()
+		case !f.Partial && finished == "":
+			finished = e.Name()
 		}
 	}
 	if resume {
 		return nil
 	}
-	for _, name := range []string{partFileName(s), partialFileName(s)} {
-		path := filepath.Join(l.datasetDir(), name)
-		if _, err := os.Stat(path); err != nil {
-			continue
-		}
-		what := "a finished run of shard " + s.String() + " is"
-		if strings.HasSuffix(name, ".partial") {
-			what = "an interrupted run of shard " + s.String() + " is"
-		}
-		return usagef("%s: %s already there; nothing was overwritten. Add --resume to continue it (a finished run is kept and its tables rebuilt), choose another --out, or remove it to start afresh",
-			path, what)
+	name, what := finished, "a finished run of shard "+s.String()+" is"
+	if partial != "" {
+		name, what = partial, "an interrupted run of shard "+s.String()+" is"
 	}
-	return nil
+	if name == "" {
+		return nil
+	}
+	return usagef("%s: %s already there; nothing was overwritten. Add --resume to continue it (a finished run is kept and its tables rebuilt), choose another --out, or remove the shard's pieces from %s to start afresh",
+		filepath.Join(l.datasetDir(), name), what, l.datasetDir())
 }

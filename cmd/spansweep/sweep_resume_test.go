@@ -5,6 +5,7 @@ import (
 	"context"
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"sync"
 	"syscall"
@@ -12,6 +13,7 @@ import (
 
 	"github.com/spansweep/spansweep/grids"
 	"github.com/spansweep/spansweep/optimize"
+	"github.com/spansweep/spansweep/outputs/dataset"
 )
 
 // interruptAfter makes the next sweep receive a real SIGINT once rows rows
@@ -62,10 +64,10 @@ func TestSweepInterruptThenResume(t *testing.T) {
 	}
 	shard := grids.Shard{K: 1, N: 1}
 	data := filepath.Join(f.dir, "out", "dataset")
-	if _, err := os.Stat(filepath.Join(data, partialFileName(shard))); err != nil {
+	if _, err := os.Stat(filepath.Join(data, dataset.PartialName(dataShard(shard), 1))); err != nil {
 		t.Fatalf("no partial part after the interrupt: %v", err)
 	}
-	for _, p := range []string{filepath.Join(data, partFileName(shard)), filepath.Join(f.dir, "out", "tables")} {
+	for _, p := range []string{filepath.Join(data, dataset.PieceName(dataShard(shard), 1)), filepath.Join(f.dir, "out", "tables")} {
 		if _, err := os.Stat(p); err == nil {
 			t.Errorf("%s exists after an interrupt; want only the partial part", p)
 		}
@@ -85,7 +87,7 @@ func TestSweepInterruptThenResume(t *testing.T) {
 		t.Errorf("resumed summary: got %d resumed + %d designed, want 5 to %d resumed, %d in all",
 			s.ResumedCases, s.DesignedCases, sweepGridCases-1, sweepGridCases)
 	}
-	if _, err := os.Stat(filepath.Join(data, partialFileName(shard))); err == nil {
+	if _, err := os.Stat(filepath.Join(data, dataset.PartialName(dataShard(shard), 1))); err == nil {
 		t.Errorf("the partial part is still there after the resumed run finished")
 	}
 }
@@ -97,7 +99,7 @@ func TestSweepInterruptThenResume(t *testing.T) {
 func TestSweepExistingOutput(t *testing.T) {
 	f := newSweepFixture(t)
 	f.mustSweep("out")
-	part := filepath.Join(f.dir, "out", "dataset", partFileName(grids.Shard{K: 1, N: 1}))
+	part := filepath.Join(f.dir, "out", "dataset", dataset.PieceName(dataShard(grids.Shard{K: 1, N: 1}), 1))
 	before, err := os.ReadFile(part)
 	if err != nil {
 		t.Fatal(err)
@@ -152,4 +154,57 @@ func TestSweepExistingOutput(t *testing.T) {
 	if after, _ := os.ReadFile(part); !bytes.Equal(after, before) {
 		t.Errorf("--tables-only changed the dataset part")
 	}
+}
+
+// With the dataset cut into pieces of 4 rows (2 row groups of 2), a run
+// interrupted inside a piece and resumed across piece boundaries, and a
+// sharded run whose shards hold 3 pieces each, give the rows and the
+// tables of a one-piece run: the pieces read as one dataset, in case order.
+func TestSweepResumeAcrossPieces(t *testing.T) {
+	f := newSweepFixture(t)
+	f.mustSweep("whole") // the default layout: 24 rows in one piece
+	datasetOptions = []dataset.Option{dataset.GroupRows(2), dataset.PieceGroups(2)}
+	t.Cleanup(func() { datasetOptions = nil })
+	whole := f.rows("whole")
+
+	interruptAfter(t, 6) // inside piece 2 (rows 4 … 7)
+	r := f.sweep("out", "--workers", "2")
+	sweepCaseHook = nil
+	if r.code != exitFail || !strings.Contains(r.errs, "--resume") {
+		t.Fatalf("interrupted run: got exit %d, want 1 naming --resume:\n%s", r.code, r.errs)
+	}
+	data := filepath.Join(f.dir, "out", "dataset")
+	shard := dataShard(grids.Shard{K: 1, N: 1})
+	first := filepath.Join(data, dataset.PartialName(shard, 1))
+	if !strings.Contains(r.errs, first) || !strings.Contains(r.errs, "pieces") {
+		t.Errorf("the interrupt message does not name the kept pieces from %s:\n%s", first, r.errs)
+	}
+	entries, _ := os.ReadDir(data)
+	for _, e := range entries {
+		if fn, ok := dataset.ParseFileName(e.Name()); ok && !fn.Partial {
+			t.Errorf("%s is under a final name after the interrupt", e.Name())
+		}
+	}
+	f.mustSweep("out", "--resume", "--workers", "1")
+	sameRows(t, "resumed in pieces against one piece", f.rows("out"), whole)
+	sameFiles(t, "resumed in pieces against one piece", f.derivedFiles("out"), f.derivedFiles("whole"))
+	var got []string
+	entries, _ = os.ReadDir(data)
+	for _, e := range entries {
+		got = append(got, e.Name())
+	}
+	var want []string
+	for p := 1; p <= sweepGridCases/4; p++ {
+		want = append(want, dataset.PieceName(shard, p))
+	}
+	if !slices.Equal(got, want) {
+		t.Errorf("dataset after the resumed run: got %v, want %v", got, want)
+	}
+
+	for k := 1; k <= 2; k++ {
+		f.mustSweep("sharded", "--shard", grids.Shard{K: k, N: 2}.String())
+	}
+	f.mustSweep("sharded", "--tables-only")
+	sameRows(t, "2 shards of 3 pieces against one piece", f.rows("sharded"), whole)
+	sameFiles(t, "2 shards of 3 pieces against one piece", f.derivedFiles("sharded"), f.derivedFiles("whole"))
 }

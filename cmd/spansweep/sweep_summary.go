@@ -4,7 +4,6 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
-	"path/filepath"
 	"time"
 
 	"github.com/spansweep/spansweep/outputs/plots"
@@ -66,7 +65,7 @@ func trendsOf(quantity, plot string, fits []plots.WindFit) []trendJSON {
 // finish reads the shard's rows back from the dataset, writes the tables and
 // plots when the run covers the whole grid, and the summary.
 func (s *sweepRun) finish(stats runStats, stdout, stderr io.Writer) error {
-	files := []string{filepath.Join(s.layout.datasetDir(), partFileName(s.shard))}
+	files := stats.files
 	var notes []string
 	if !s.whole() {
 		notes = append(notes, fmt.Sprintf("shard %s: tables and plots are written by 'spansweep sweep --tables-only' once every shard has finished", s.shard))

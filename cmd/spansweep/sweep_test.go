@@ -208,7 +208,7 @@ func TestSweepWritesLayout(t *testing.T) {
 	f := newSweepFixture(t)
 	r := f.mustSweep("out", "--workers", "2")
 	for _, p := range []string{
-		"dataset/" + partFileName(grids.Shard{K: 1, N: 1}),
+		"dataset/" + dataset.PieceName(dataShard(grids.Shard{K: 1, N: 1}), 1),
 		"tables/span-tables.csv", "tables/span-tables.md", "tables/span-tables.html",
 		"plots/governing-checks.svg", "summary.json",
 	} {

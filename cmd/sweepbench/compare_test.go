@@ -31,12 +31,12 @@ func madeUpResults(t *testing.T) []optimize.Result {
 }
 
 // writeShards writes results as a dataset of n parts (shards 1/n … n/n, by
-// grids.Shard.Range) in dir.
-func writeShards(t *testing.T, dir string, results []optimize.Result, n int) {
+// grids.Shard.Range) in dir, cut into pieces as opts say.
+func writeShards(t *testing.T, dir string, results []optimize.Result, n int, opts ...dataset.Option) {
 	t.Helper()
 	for k := 1; k <= n; k++ {
 		meta := dataset.Meta{ProgramVersion: "test", GridSHA256: "g1", CatalogSHA256: "c1", Shard: dataset.Shard{K: k, N: n}}
-		w, err := dataset.Create(dir, meta)
+		w, err := dataset.Create(dir, meta, opts...)
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -66,15 +66,18 @@ func TestCompareDatasets(t *testing.T) {
 		parts     int
 		wantDiffs int
 		wantText  []string // substrings of the differences
+		opts      []dataset.Option
 	}{
-		{"same rows in three parts", results, 3, 0, nil},
-		{"one mass changed", changed, 1, 1, []string{"row 5", "550.001 kg", "first differing field SteelMassKg"}},
-		{"last row missing", results[:len(results)-1], 2, 1, []string{"row count", "has 8", "has 7"}},
+		{"same rows in three parts", results, 3, 0, nil, nil},
+		// 2 shards of 4 rows, each in pieces of 2 (row groups of 1 row).
+		{"same rows in pieces of two", results, 2, 0, nil, []dataset.Option{dataset.GroupRows(1), dataset.PieceGroups(2)}},
+		{"one mass changed", changed, 1, 1, []string{"row 5", "550.001 kg", "first differing field SteelMassKg"}, nil},
+		{"last row missing", results[:len(results)-1], 2, 1, []string{"row count", "has 8", "has 7"}, nil},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
 			dir := filepath.Join(base, strings.ReplaceAll(tt.name, " ", "-"))
-			writeShards(t, dir, tt.results, tt.parts)
+			writeShards(t, dir, tt.results, tt.parts, tt.opts...)
 			n, diffs, err := compareDatasets(one, dir)
 			if err != nil {
 				t.Fatal(err)

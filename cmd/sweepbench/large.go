@@ -26,6 +26,7 @@ type largeRun struct {
 	CasesPerS float64 `json:"cases_per_s"`
 	PeakRSSMB float64 `json:"peak_rss_mb"` // the child's ru_maxrss
 	Rows      int64   `json:"rows"`        // rows in the dataset it wrote
+	Files     int     `json:"files"`       // its part files (pieces)
 	DatasetMB float64 `json:"dataset_mb"`  // size of its part files
 }
 
@@ -69,6 +70,7 @@ func measureLarge(o *options, rep *report, progress io.Writer) error {
 		fmt.Fprintf(progress, "sweepbench: %s: %.0f s, peak RSS %.1f MB\n", file, r.WallS, r.PeakRSSMB)
 		rep.Large = append(rep.Large, r)
 	}
+	rep.largePeakRatio()
 	return nil
 }
 
@@ -109,6 +111,7 @@ func sweepChild(bin, grid, cat, out string, workers int) (largeRun, error) {
 	}
 	defer d.Close()
 	r.Rows = d.NumRows()
+	r.Files = len(d.Parts())
 	for _, p := range d.Parts() {
 		if st, err := os.Stat(p); err == nil {
 			r.DatasetMB += float64(st.Size()) / 1e6

@@ -25,6 +25,25 @@ type report struct {
 	Large      []largeRun        `json:"large,omitempty"`
 	// LargeCatalogue names the catalogue of the --large runs.
 	LargeCatalogue string `json:"large_catalogue,omitempty"`
+	// LargePeakRatio is the peak memory of the last --large run over that
+	// of the first (the grids come smallest first): 1 when the memory does
+	// not grow with the grid.
+	LargePeakRatio float64 `json:"large_peak_ratio,omitempty"`
+	// LargeCasesRatio is the cases of the last --large grid over those of
+	// the first.
+	LargeCasesRatio float64 `json:"large_cases_ratio,omitempty"`
+}
+
+// largePeakRatio sets LargePeakRatio and LargeCasesRatio from the first and
+// last --large runs.
+func (r *report) largePeakRatio() {
+	n := len(r.Large)
+	if n < 2 || r.Large[0].PeakRSSMB <= 0 || r.Large[0].Cases == 0 {
+		return
+	}
+	first, last := r.Large[0], r.Large[n-1]
+	r.LargePeakRatio = last.PeakRSSMB / first.PeakRSSMB
+	r.LargeCasesRatio = float64(last.Cases) / float64(first.Cases)
 }
 
 // speedup sets Speedup from the first and last throughput runs.
@@ -91,7 +110,11 @@ func (r *report) writeText(w io.Writer) {
 		line("large: cases/s", "%.1f cases/s", l.CasesPerS)
 		line("large: peak resident memory (ru_maxrss)", "%.1f MB", l.PeakRSSMB)
 		line("large: dataset rows", "%d", l.Rows)
+		line("large: dataset files", "%d", l.Files)
 		line("large: dataset size", "%.1f MB", l.DatasetMB)
+	}
+	if r.LargePeakRatio > 0 {
+		line("large: peak memory, last grid over first", "%.3f (at %.2f times the cases)", r.LargePeakRatio, r.LargeCasesRatio)
 	}
 	fmt.Fprintln(w, caution)
 }

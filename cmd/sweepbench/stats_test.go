@@ -54,3 +54,20 @@ func TestVmHWM(t *testing.T) {
 		t.Errorf("this process's peak RSS = %g MB, want more than 1 MB", mb)
 	}
 }
+
+// The flatness line divides the last --large run's peak by the first's:
+// 180 MB at 1,049,600 cases over 90 MB at 262,400 is 2 (memory grew with
+// the grid) at 4 times the cases (arithmetic by hand); one run gives no
+// ratio.
+func TestLargePeakRatio(t *testing.T) {
+	r := report{Large: []largeRun{{Cases: 262_400, PeakRSSMB: 90}, {Cases: 1_049_600, PeakRSSMB: 180}}}
+	r.largePeakRatio()
+	if r.LargePeakRatio != 2 || r.LargeCasesRatio != 4 {
+		t.Errorf("got peak ratio %g at cases ratio %g, want 2 at 4", r.LargePeakRatio, r.LargeCasesRatio)
+	}
+	one := report{Large: []largeRun{{Cases: 262_400, PeakRSSMB: 90}}}
+	one.largePeakRatio()
+	if one.LargePeakRatio != 0 {
+		t.Errorf("one run: got peak ratio %g, want none (0)", one.LargePeakRatio)
+	}
+}

@@ -120,7 +120,7 @@ func TestArrowReadsWhatWasWritten(t *testing.T) {
 	if err := writeAll(dir, testMeta, results); err != nil {
 		t.Fatal(err)
 	}
-	cols, kv := readWithArrow(t, filepath.Join(dir, "part-00001-of-00001.parquet"))
+	cols, kv := readWithArrow(t, filepath.Join(dir, "part-00001-of-00001-piece-00001.parquet"))
 	for k, want := range map[string]string{KeyProgramVersion: "test-1", KeyGridSHA256: "aa11", KeyCatalogSHA256: "bb22",
 		KeySchemaVersion: SchemaVersion, KeyShard: "1/1", KeyComplete: "true"} {
 		if got := kv(k); got != want {

@@ -48,5 +48,5 @@ func Example() {
 	// Output:
 	// case-1 span 9 m steel 900 kg
 	// case-2 span 12 m steel 1200 kg
-	// part-00001-of-00001.parquet 1/1
+	// part-00001-of-00001-piece-00001.parquet 1/1
 }

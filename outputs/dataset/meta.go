@@ -13,7 +13,7 @@ const (
 	KeyCatalogSHA256  = "catalog_sha256"
 	KeySchemaVersion  = "schema_version"
 	KeyShard          = "shard"    // "K/N"
-	KeyComplete       = "complete" // "true" once the part holds every case of its shard
+	KeyComplete       = "complete" // "false" only in the piece an interrupted run cut short
 )
 
 // Shard is the slice of the grid one part holds: number K of N, 1-based.
@@ -64,14 +64,56 @@ type Meta struct {
 	Shard          Shard
 }
 
-// partName is the final file name of a shard's part.
-func partName(s Shard) string {
+// PieceRowGroups is the number of row groups in each piece file of a shard
+// (131,072 rows at RowGroupRows 4096). A Parquet writer holds the metadata
+// of every row group of its file until the footer is written, and a reader
+// holds the footer of every file it has open; cutting a shard into pieces
+// of a bounded number of groups keeps both bounded however large the grid.
+const PieceRowGroups = 32
+
+// PartialPrefix begins the name of every piece of a shard that has not
+// finished: the pieces of a run in progress and those an interrupted run
+// keeps. Directory scans that skip names beginning with "_" or "." (pyarrow,
+// Spark) and the part-*.parquet glob pass them by; dropping the prefix gives
+// the piece's final name.
+const PartialPrefix = "_partial-"
+
+// PieceName is the final file name of piece p (1-based) of shard s:
+// part-KKKKK-of-NNNNN-piece-PPPPP.parquet. The zero padding makes the
+// names sort in case order.
+func PieceName(s Shard, p int) string {
 	s = s.norm()
-	return fmt.Sprintf("part-%05d-of-%05d.parquet", s.K, s.N)
+	return fmt.Sprintf("part-%05d-of-%05d-piece-%05d.parquet", s.K, s.N, p)
 }
 
-func tempName(s Shard) string    { return "." + partName(s) + ".tmp" }
-func partialName(s Shard) string { return partName(s) + ".partial" }
+// PartialName is the name of piece p of shard s while the shard has not
+// finished: PartialPrefix + PieceName(s, p).
+func PartialName(s Shard, p int) string { return PartialPrefix + PieceName(s, p) }
+
+// tempName is the hidden name of the piece being written.
+func tempName(s Shard, p int) string { return "." + PieceName(s, p) + ".tmp" }
+
+// FileName is a dataset file name taken apart.
+type FileName struct {
+	Shard   Shard
+	Piece   int  // 1-based
+	Partial bool // named with PartialPrefix: its shard has not finished
+}
+
+// ParseFileName takes apart a name made by PieceName or PartialName; ok is
+// false for any other name.
+func ParseFileName(name string) (f FileName, ok bool) {
+	rest, partial := strings.CutPrefix(name, PartialPrefix)
+	var k, n, p int
+	if _, err := fmt.Sscanf(rest, "part-%05d-of-%05d-piece-%05d.parquet", &k, &n, &p); err != nil {
+		return FileName{}, false
+	}
+	f = FileName{Shard: Shard{k, n}, Piece: p, Partial: partial}
+	if f.Shard.validate() != nil || p < 1 || PieceName(f.Shard, p) != rest {
+		return FileName{}, false
+	}
+	return f, true
+}
 
 // MismatchError reports a part whose metadata does not match the run that
 // wants to resume or read it.

@@ -33,28 +33,44 @@ func (d *Dataset) ScanColumns(f Filter, names []string, fn func(r *Row, ref RowR
 		return st, err
 	}
 	var rows []Row
-	for pi, p := range d.parts {
-		for gi, g := range p.pf.RowGroups() {
-			st.RowGroups++
-			if !p.mayMatch(bs, g) {
-				continue
-			}
-			st.RowGroupsRead++
-			if rows, err = p.readColumns(g, cols, rows); err != nil {
-				return st, err
-			}
-			for ri := range rows {
-				if !matchRow(bs, &rows[ri]) {
-					continue
-				}
-				st.RowsMatched++
-				if err := fn(&rows[ri], RowRef{pi, gi, ri}); err != nil {
-					return st, err
-				}
-			}
+	for pi := range d.files {
+		p, done, err := d.piece(pi)
+		if err != nil {
+			return st, err
+		}
+		rows, err = p.scanColumns(pi, bs, cols, rows, &st, fn)
+		done()
+		if err != nil {
+			return st, err
 		}
 	}
 	return st, nil
+}
+
+// scanColumns is ScanColumns over the row groups of part pi, decoding into
+// rows (reused) and returning them.
+func (p *part) scanColumns(pi int, bs []boundIndex, cols []int, rows []Row, st *ScanStats, fn func(r *Row, ref RowRef) error) ([]Row, error) {
+	for gi, g := range p.pf.RowGroups() {
+		st.RowGroups++
+		if !p.mayMatch(bs, g) {
+			continue
+		}
+		st.RowGroupsRead++
+		var err error
+		if rows, err = p.readColumns(g, cols, rows); err != nil {
+			return rows, err
+		}
+		for ri := range rows {
+			if !matchRow(bs, &rows[ri]) {
+				continue
+			}
+			st.RowsMatched++
+			if err := fn(&rows[ri], RowRef{pi, gi, ri}); err != nil {
+				return rows, err
+			}
+		}
+	}
+	return rows, nil
 }
 
 // projection resolves the column names to decode: the named ones and the
@@ -152,10 +168,14 @@ func readChunk(cc parquet.ColumnChunk, c int, rows []Row) error {
 
 // ReadRow decodes the whole row at ref.
 func (d *Dataset) ReadRow(ref RowRef) (Row, error) {
-	if ref.part >= len(d.parts) {
+	if ref.part < 0 || ref.part >= len(d.files) {
 		return Row{}, fmt.Errorf("dataset: row reference %+v out of range", ref)
 	}
-	p := d.parts[ref.part]
+	p, done, err := d.piece(ref.part)
+	if err != nil {
+		return Row{}, err
+	}
+	defer done()
 	groups := p.pf.RowGroups()
 	if ref.group >= len(groups) || int64(ref.row) >= groups[ref.group].NumRows() {
 		return Row{}, fmt.Errorf("dataset: row reference %+v out of range", ref)

@@ -11,18 +11,32 @@ import (
 // ErrNoParts is returned by Open for a directory without part files.
 var ErrNoParts = errors.New("dataset: no part-*.parquet files")
 
-// Dataset is an open dataset directory: every complete part, in shard order.
+// Dataset is an open dataset directory: every finished piece, in shard and
+// piece order, read as one. It keeps at most one piece file open at a time
+// (the one last read), so its memory does not grow with the number of
+// pieces: a piece's footer holds the metadata of each of its row groups. A
+// Dataset is not safe for concurrent use.
 type Dataset struct {
 	dir   string
 	meta  Meta
-	parts []*part
+	files []pieceFile
+	open  *part // the piece last read, kept open; nil if none
+	at    int   // its index in files
+	busy  int   // scans under way on open: it is not closed under them
+}
+
+// pieceFile is one piece of the dataset as Open found it.
+type pieceFile struct {
+	path string
+	rows int64
 }
 
 // Open opens every part-*.parquet file in dir. It fails if dir is missing
 // (the error wraps fs.ErrNotExist), holds no parts (ErrNoParts), holds a part
 // that is not readable Parquet, was written with another schema version
 // (*VersionError), or mixes parts of different grids or catalogues
-// (*MismatchError).
+// (*MismatchError). Files named with PartialPrefix (a shard not yet
+// finished) are not part of the dataset.
 func Open(dir string) (*Dataset, error) {
 	st, err := os.Stat(dir)
 	if err != nil {
@@ -46,22 +60,67 @@ func Open(dir string) (*Dataset, error) {
 			d.Close()
 			return nil, err
 		}
-		d.parts = append(d.parts, p)
 		m, err := metaOf(p.pf.Lookup)
 		if err != nil {
+			p.close()
 			d.Close()
 			return nil, fmt.Errorf("dataset: %s: %w", path, err)
 		}
 		if i == 0 {
 			d.meta = m
-			continue
-		}
-		if m.GridSHA256 != d.meta.GridSHA256 || m.CatalogSHA256 != d.meta.CatalogSHA256 || m.ProgramVersion != d.meta.ProgramVersion {
+		} else if m.GridSHA256 != d.meta.GridSHA256 || m.CatalogSHA256 != d.meta.CatalogSHA256 || m.ProgramVersion != d.meta.ProgramVersion {
+			p.close()
 			d.Close()
 			return nil, mixedParts(path, m, d.meta)
 		}
+		d.files = append(d.files, pieceFile{path: path, rows: p.pf.NumRows()})
+		if i == 0 {
+			d.keep(p, i) // scans start here
+		} else {
+			p.close()
+		}
 	}
 	return d, nil
+}
+
+// keep makes p, piece i, the open piece, closing the one before.
+func (d *Dataset) keep(p *part, i int) {
+	if d.open != nil {
+		d.open.close()
+	}
+	d.open, d.at = p, i
+}
+
+// piece returns piece i open, and the function to call when done with it.
+// The open piece is reused; another replaces it unless a scan is reading it,
+// in which case the new one is closed when done.
+func (d *Dataset) piece(i int) (*part, func(), error) {
+	if i < 0 || i >= len(d.files) {
+		return nil, nil, fmt.Errorf("dataset: piece %d of %d", i, len(d.files))
+	}
+	if d.open != nil && d.at == i {
+		d.busy++
+		return d.open, func() { d.busy-- }, nil
+	}
+	if d.busy == 0 && d.open != nil {
+		d.open.close() // before the next is read: one footer in memory, not two
+		d.open = nil
+	}
+	f := d.files[i]
+	p, err := openPart(f.path)
+	if err != nil {
+		return nil, nil, err
+	}
+	if p.pf.NumRows() != f.rows {
+		p.close()
+		return nil, nil, fmt.Errorf("dataset: %s: %d rows, but %d when the dataset was opened; it changed under the reader", f.path, p.pf.NumRows(), f.rows)
+	}
+	if d.busy > 0 {
+		return p, func() { p.close() }, nil
+	}
+	d.keep(p, i)
+	d.busy++
+	return p, func() { d.busy-- }, nil
 }
 
 // mixedParts names the first metadata key in which two parts differ.
@@ -79,11 +138,11 @@ func mixedParts(path string, got, want Meta) error {
 // that every part agrees).
 func (d *Dataset) Meta() Meta { return d.meta }
 
-// Parts returns the paths of the part files, in shard order.
+// Parts returns the paths of the part files, in shard and piece order.
 func (d *Dataset) Parts() []string {
-	paths := make([]string, len(d.parts))
-	for i, p := range d.parts {
-		paths[i] = p.path
+	paths := make([]string, len(d.files))
+	for i, f := range d.files {
+		paths[i] = f.path
 	}
 	return paths
 }
@@ -91,8 +150,8 @@ func (d *Dataset) Parts() []string {
 // NumRows returns the number of rows in all parts.
 func (d *Dataset) NumRows() int64 {
 	var n int64
-	for _, p := range d.parts {
-		n += p.pf.NumRows()
+	for _, f := range d.files {
+		n += f.rows
 	}
 	return n
 }
@@ -105,14 +164,14 @@ func (d *Dataset) Each(fn func(*Row) error) error {
 	return err
 }
 
-// Close closes every part file.
+// Close closes the open part file.
 func (d *Dataset) Close() error {
-	var errs []error
-	for _, p := range d.parts {
-		errs = append(errs, p.close())
+	var err error
+	if d.open != nil {
+		err = d.open.close()
 	}
-	d.parts = nil
-	return errors.Join(errs...)
+	d.open, d.files = nil, nil
+	return err
 }
 
 // Clone returns a deep copy of r, safe to keep after an Each or Scan

@@ -41,14 +41,14 @@ func TestOpenErrors(t *testing.T) {
 	})
 	t.Run("corrupt", func(t *testing.T) {
 		dir := t.TempDir()
-		os.WriteFile(filepath.Join(dir, "part-00001-of-00001.parquet"), []byte("not parquet"), 0o644)
+		os.WriteFile(filepath.Join(dir, "part-00001-of-00001-piece-00001.parquet"), []byte("not parquet"), 0o644)
 		if _, err := Open(dir); err == nil {
 			t.Error("got nil error, want a not-readable error")
 		}
 	})
 	t.Run("other schema version", func(t *testing.T) {
 		dir := t.TempDir()
-		f, _ := os.Create(filepath.Join(dir, "part-00001-of-00001.parquet"))
+		f, _ := os.Create(filepath.Join(dir, "part-00001-of-00001-piece-00001.parquet"))
 		w := parquet.NewWriter(f, schema, parquet.KeyValueMetadata(KeySchemaVersion, "0"))
 		w.Close()
 		f.Close()

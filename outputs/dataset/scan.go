@@ -133,24 +133,38 @@ func (d *Dataset) Scan(f Filter, fn func(*Row) error) (ScanStats, error) {
 	if err != nil {
 		return st, err
 	}
-	for _, p := range d.parts {
-		for _, g := range p.pf.RowGroups() {
-			st.RowGroups++
-			if !p.mayMatch(bs, g) {
-				continue
-			}
-			st.RowGroupsRead++
-			err := p.readGroup(g, func(r *Row) error {
-				if !matchRow(bs, r) {
-					return nil
-				}
-				st.RowsMatched++
-				return fn(r)
-			})
-			if err != nil {
-				return st, err
-			}
+	for i := range d.files {
+		p, done, err := d.piece(i)
+		if err != nil {
+			return st, err
+		}
+		err = p.scan(bs, &st, fn)
+		done()
+		if err != nil {
+			return st, err
 		}
 	}
 	return st, nil
+}
+
+// scan is Scan over the row groups of one part.
+func (p *part) scan(bs []boundIndex, st *ScanStats, fn func(*Row) error) error {
+	for _, g := range p.pf.RowGroups() {
+		st.RowGroups++
+		if !p.mayMatch(bs, g) {
+			continue
+		}
+		st.RowGroupsRead++
+		err := p.readGroup(g, func(r *Row) error {
+			if !matchRow(bs, r) {
+				return nil
+			}
+			st.RowsMatched++
+			return fn(r)
+		})
+		if err != nil {
+			return err
+		}
+	}
+	return nil
 }

@@ -14,38 +14,89 @@ import (
 // statistics (min, max) let a lookup skip groups without decoding them.
 const RowGroupRows = 4096
 
-// Writer streams rows of one shard into its part file. Rows must come in
-// enumeration order (case_index strictly ascending). Nothing appears under
-// the final name until Close succeeds. A Writer is not safe for concurrent
-// use: the engine's ordered output feeds it from one goroutine.
+// pageBufferBytes is the Parquet writer's page buffer per column. The
+// writer sizes each column's buffer by it, so it sets most of the memory a
+// Writer holds (201 columns). A row group's numeric column is 4096 × 8 B =
+// 32 KiB, so 64 KiB still writes it as one page; the library's default,
+// 256 KiB, sized every buffer for four times the values a group holds.
+const pageBufferBytes = 64 << 10
+
+// layout is how a Writer cuts a shard's rows into row groups and pieces.
+type layout struct {
+	groupRows   int // rows per row group
+	pieceGroups int // row groups per piece
+}
+
+func (l layout) pieceRows() int { return l.groupRows * l.pieceGroups }
+
+// Option sets how a Writer cuts the rows; the defaults are RowGroupRows and
+// PieceRowGroups. Tests use small values to exercise several groups and
+// pieces with few rows. The rows and their order do not depend on it.
+type Option func(*layout)
+
+// GroupRows sets the number of rows per row group (n ≥ 1).
+func GroupRows(n int) Option { return func(l *layout) { l.groupRows = n } }
+
+// PieceGroups sets the number of row groups per piece file (n ≥ 1).
+func PieceGroups(n int) Option { return func(l *layout) { l.pieceGroups = n } }
+
+func newLayout(opts []Option) (layout, error) {
+	l := layout{groupRows: RowGroupRows, pieceGroups: PieceRowGroups}
+	for _, o := range opts {
+		o(&l)
+	}
+	if l.groupRows < 1 || l.pieceGroups < 1 {
+		return l, fmt.Errorf("dataset: %d rows per row group, %d row groups per piece: want at least 1 of each", l.groupRows, l.pieceGroups)
+	}
+	return l, nil
+}
+
+// Writer streams rows of one shard into its piece files. Rows must come in
+// enumeration order (case_index strictly ascending). Each piece is written
+// under a hidden temporary name and, once it holds its row groups, renamed
+// to its partial name (PartialName); Close renames every piece to its final
+// name (PieceName), so nothing appears under a final name until the whole
+// shard is written. A Writer is not safe for concurrent use: the engine's
+// ordered output feeds it from one goroutine.
 //
-// Memory: each row goes straight to the Parquet writer, which holds the
-// current row group's columns; the Writer keeps no rows and no record per
-// case. What still grows is the footer the Parquet writer keeps until
-// Close: the metadata and page indexes of every row group (some tens of
-// bytes a row at RowGroupRows 4096 and 201 columns; larger row groups
-// would shrink it, at the cost of coarser skipping).
+// Memory: each row goes straight to the Parquet writer, which holds a page
+// buffer per column (pageBufferBytes) and, until the piece's footer is
+// written, the metadata and page indexes of the piece's row groups (some
+// 200 kB a group at 201 columns). A piece holds at most PieceRowGroups
+// groups, so both are bounded whatever the number of rows; the Writer keeps
+// no rows and no record per case, only one name per finished piece.
 type Writer struct {
-	dir     string
-	meta    Meta
-	tmp     *os.File
-	pw      *parquet.Writer
-	one     [1]parquet.Row // the row being written; its buffer is reused
-	pending int            // rows written since the last row group
-	rows    int
+	dir    string
+	meta   Meta
+	layout layout
+	// The piece being written: its number, hidden file, Parquet writer and
+	// rows so far. Pieces 1 … piece−1 are finished and in dir.
+	piece     int
+	tmp       *os.File
+	pw        *parquet.Writer
+	pieceRows int
+	pending   int            // rows written since the last row group
+	one       [1]parquet.Row // the row being written; its buffer is reused
+	rows      int
 	// The case_index of the first and last rows and the last row's id:
 	// rows come in strictly ascending case_index, so these describe what
-	// the part holds without a record per case (memory stays flat however
-	// many rows a part gets).
+	// the shard holds without a record per case (memory stays flat however
+	// many rows a shard gets).
 	firstIndex, lastIndex int
 	lastID                string
+	files                 []string // paths of the finished pieces, as they are named now
 	closed                bool
 }
 
-// Create starts a new part for meta.Shard in dir, creating dir if needed. A
-// part or partial part left by an earlier run is replaced only when Close
-// succeeds.
-func Create(dir string, meta Meta) (*Writer, error) {
+// Create starts a new run of meta.Shard in dir, creating dir if needed.
+// Files an earlier run of the shard left (finished or partial pieces) are
+// replaced or removed only when Close succeeds; until then a partial piece
+// of the same number is replaced as this run finishes its own.
+func Create(dir string, meta Meta, opts ...Option) (*Writer, error) {
+	l, err := newLayout(opts)
+	if err != nil {
+		return nil, err
+	}
 	if err := meta.Shard.validate(); err != nil {
 		return nil, err
 	}
@@ -53,15 +104,25 @@ func Create(dir string, meta Meta) (*Writer, error) {
 	if err := os.MkdirAll(dir, 0o755); err != nil {
 		return nil, fmt.Errorf("dataset: create directory: %w", err)
 	}
-	tmpPath := filepath.Join(dir, tempName(meta.Shard))
-	f, err := os.Create(tmpPath)
-	if err != nil {
-		return nil, fmt.Errorf("dataset: create part: %w", err)
+	w := &Writer{dir: dir, meta: meta, layout: l, firstIndex: -1, lastIndex: -1}
+	if err := w.startPiece(1); err != nil {
+		return nil, err
 	}
-	w := &Writer{dir: dir, meta: meta, tmp: f, firstIndex: -1, lastIndex: -1}
+	return w, nil
+}
+
+// startPiece opens piece p's temporary file and Parquet writer.
+func (w *Writer) startPiece(p int) error {
+	f, err := os.Create(filepath.Join(w.dir, tempName(w.meta.Shard, p)))
+	if err != nil {
+		return fmt.Errorf("dataset: create part: %w", err)
+	}
+	w.piece, w.tmp, w.pieceRows, w.pending = p, f, 0, 0
+	meta := w.meta
 	w.pw = parquet.NewWriter(f, schema,
 		parquet.Compression(&snappy.Codec{}),
 		parquet.DataPageStatistics(true),
+		parquet.PageBufferSize(pageBufferBytes),
 		parquet.CreatedBy("spansweep", meta.ProgramVersion, ""),
 		parquet.SortingWriterConfig(parquet.SortingColumns(parquet.Ascending("case_index"))),
 		parquet.KeyValueMetadata(KeyProgramVersion, meta.ProgramVersion),
@@ -71,11 +132,14 @@ func Create(dir string, meta Meta) (*Writer, error) {
 		parquet.KeyValueMetadata(KeyShard, meta.Shard.String()),
 		parquet.KeyValueMetadata(KeyComplete, "false"),
 	)
-	return w, nil
+	return nil
 }
 
-// Path returns the part's final path.
-func (w *Writer) Path() string { return filepath.Join(w.dir, partName(w.meta.Shard)) }
+// Files returns the paths of the pieces holding the rows written so far,
+// in case order: after Close their final paths, after Abort the partial
+// pieces kept for Resume, before either the pieces finished so far (the one
+// being written is not among them).
+func (w *Writer) Files() []string { return append([]string(nil), w.files...) }
 
 // Rows returns the number of rows written so far, resumed ones included.
 func (w *Writer) Rows() int { return w.rows }
@@ -85,7 +149,7 @@ func (w *Writer) Rows() int { return w.rows }
 func (w *Writer) FirstIndex() int { return w.firstIndex }
 
 // LastIndex returns the case_index of the last row written; -1 before any
-// row. Rows come in strictly ascending case_index, so after Resume the part
+// row. Rows come in strictly ascending case_index, so after Resume the shard
 // holds an unbroken run of cases exactly when LastIndex − FirstIndex + 1
 // equals Rows.
 func (w *Writer) LastIndex() int { return w.lastIndex }
@@ -108,13 +172,36 @@ func (w *Writer) Write(r Row) error {
 		return fmt.Errorf("dataset: write rows: %w", err)
 	}
 	w.pending++
+	w.pieceRows++
 	if w.rows == 0 {
 		w.firstIndex = r.CaseIndex
 	}
 	w.lastIndex, w.lastID = r.CaseIndex, r.CaseID
 	w.rows++
-	if w.pending == RowGroupRows {
-		return w.flush()
+	if w.pending == w.layout.groupRows {
+		if err := w.flush(); err != nil {
+			return err
+		}
+	}
+	if w.pieceRows == w.layout.pieceRows() {
+		return w.nextPiece()
+	}
+	return nil
+}
+
+// nextPiece finishes the full piece under its partial name and starts the
+// next one.
+func (w *Writer) nextPiece() error {
+	name := PartialName(w.meta.Shard, w.piece)
+	if err := w.finish(true, name); err != nil {
+		w.closed = true
+		return err
+	}
+	w.files = append(w.files, filepath.Join(w.dir, name))
+	w.pw, w.tmp = nil, nil // the finished piece's buffers go before the next's are made
+	if err := w.startPiece(w.piece + 1); err != nil {
+		w.closed = true
+		return err
 	}
 	return nil
 }
@@ -131,10 +218,10 @@ func (w *Writer) flush() error {
 	return nil
 }
 
-// finish writes the footer with complete set, closes the temporary file and
-// renames it to name. On failure the temporary file is removed.
+// finish writes the current piece's footer with complete set, closes its
+// temporary file and renames it to name. On failure the temporary file is
+// removed.
 func (w *Writer) finish(complete bool, name string) (err error) {
-	w.closed = true
 	tmpPath := w.tmp.Name()
 	defer func() {
 		if err != nil {
@@ -162,36 +249,83 @@ func (w *Writer) finish(complete bool, name string) (err error) {
 	return nil
 }
 
-// Close finalizes the part: the footer is written with complete=true, the
-// temporary file is renamed to part-K-of-N.parquet, and a partial part of an
-// earlier, interrupted run of this shard is removed.
+// dropPiece removes the current piece's temporary file unwritten.
+func (w *Writer) dropPiece() error {
+	w.tmp.Close()
+	return os.Remove(w.tmp.Name())
+}
+
+// Close finalizes the shard: the last piece's footer is written with
+// complete=true, every piece is renamed to its final name (part-K-of-N-
+// piece-P.parquet), and any other piece of this shard an earlier run left
+// is removed. A shard without rows still gets one (empty) piece.
 func (w *Writer) Close() error {
 	if w.closed {
 		return errors.New("dataset: Close after Close or Abort")
 	}
-	if err := w.finish(true, partName(w.meta.Shard)); err != nil {
-		return err
+	w.closed = true
+	if w.pieceRows > 0 || w.piece == 1 {
+		name := PartialName(w.meta.Shard, w.piece)
+		if err := w.finish(true, name); err != nil {
+			return err
+		}
+		w.files = append(w.files, filepath.Join(w.dir, name))
+	} else if err := w.dropPiece(); err != nil {
+		return fmt.Errorf("dataset: remove empty piece: %w", err)
 	}
-	if err := os.Remove(filepath.Join(w.dir, partialName(w.meta.Shard))); err != nil && !errors.Is(err, os.ErrNotExist) {
-		return fmt.Errorf("dataset: remove partial part: %w", err)
+	n := len(w.files)
+	for p := 1; p <= n; p++ {
+		final := filepath.Join(w.dir, PieceName(w.meta.Shard, p))
+		partial := filepath.Join(w.dir, PartialName(w.meta.Shard, p))
+		if err := os.Rename(partial, final); err != nil && !errors.Is(err, os.ErrNotExist) {
+			return fmt.Errorf("dataset: finalize part: %w", err)
+		}
+		w.files[p-1] = final
+	}
+	syncDir(w.dir)
+	return w.removeOthers(n)
+}
+
+// removeOthers removes the pieces of this shard numbered above n, final or
+// partial, and partial pieces of any number: what an earlier run of the
+// shard left that this run did not replace.
+func (w *Writer) removeOthers(n int) error {
+	entries, err := os.ReadDir(w.dir)
+	if err != nil {
+		return fmt.Errorf("dataset: remove earlier pieces: %w", err)
+	}
+	for _, e := range entries {
+		f, ok := ParseFileName(e.Name())
+		if !ok || f.Shard != w.meta.Shard || (f.Piece <= n && !f.Partial) {
+			continue
+		}
+		if err := os.Remove(filepath.Join(w.dir, e.Name())); err != nil && !errors.Is(err, os.ErrNotExist) {
+			return fmt.Errorf("dataset: remove earlier piece: %w", err)
+		}
 	}
 	return nil
 }
 
-// Abort stops an interrupted run. With rows written, it finalizes them as a
-// valid Parquet file part-K-of-N.parquet.partial (complete=false) for
-// Resume; with none, or when finalizing fails, it removes the temporary file.
-// The final part name is never touched.
+// Abort stops an interrupted run. The piece being written, if it has rows,
+// is finalized as a valid Parquet file under its partial name
+// (_partial-part-K-of-N-piece-P.parquet, complete=false) for Resume; the
+// pieces finished before it keep their partial names. Without rows in it,
+// or when finalizing fails, its temporary file is removed. No final name is
+// touched.
 func (w *Writer) Abort() error {
 	if w.closed {
 		return nil
 	}
-	if w.rows == 0 {
-		w.closed = true
-		w.tmp.Close()
-		return os.Remove(w.tmp.Name())
+	w.closed = true
+	if w.pieceRows == 0 {
+		return w.dropPiece()
 	}
-	return w.finish(false, partialName(w.meta.Shard))
+	name := PartialName(w.meta.Shard, w.piece)
+	if err := w.finish(false, name); err != nil {
+		return err
+	}
+	w.files = append(w.files, filepath.Join(w.dir, name))
+	return nil
 }
 
 // syncDir makes a rename durable where the platform allows it; failure is

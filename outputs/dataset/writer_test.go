@@ -50,7 +50,7 @@ func TestNoFinalFileBeforeClose(t *testing.T) {
 			t.Fatal(err)
 		}
 	}
-	if got := names(t, dir); !reflect.DeepEqual(got, []string{".part-00001-of-00001.parquet.tmp"}) {
+	if got := names(t, dir); !reflect.DeepEqual(got, []string{".part-00001-of-00001-piece-00001.parquet.tmp"}) {
 		t.Errorf("before Close: got files %v, want only the temporary part", got)
 	}
 	if _, err := Open(dir); !errors.Is(err, ErrNoParts) {
@@ -59,7 +59,7 @@ func TestNoFinalFileBeforeClose(t *testing.T) {
 	if err := w.Close(); err != nil {
 		t.Fatal(err)
 	}
-	if got := names(t, dir); !reflect.DeepEqual(got, []string{"part-00001-of-00001.parquet"}) {
+	if got := names(t, dir); !reflect.DeepEqual(got, []string{"part-00001-of-00001-piece-00001.parquet"}) {
 		t.Errorf("after Close: got files %v, want only the final part", got)
 	}
 	if got := len(readAll(t, dir)); got != RowGroupRows+5 {
@@ -70,7 +70,7 @@ func TestNoFinalFileBeforeClose(t *testing.T) {
 func TestTempRemovedWhenFinalizeFails(t *testing.T) {
 	dir := t.TempDir()
 	// A non-empty directory under the final name makes the rename fail.
-	if err := os.MkdirAll(filepath.Join(dir, "part-00001-of-00001.parquet", "x"), 0o755); err != nil {
+	if err := os.MkdirAll(filepath.Join(dir, "part-00001-of-00001-piece-00001.parquet", "x"), 0o755); err != nil {
 		t.Fatal(err)
 	}
 	w, err := Create(dir, testMeta)
@@ -83,7 +83,7 @@ func TestTempRemovedWhenFinalizeFails(t *testing.T) {
 	if err := w.Close(); err == nil {
 		t.Fatal("Close: got nil error, want the rename failure")
 	}
-	if _, err := os.Stat(filepath.Join(dir, ".part-00001-of-00001.parquet.tmp")); !errors.Is(err, fs.ErrNotExist) {
+	if _, err := os.Stat(filepath.Join(dir, ".part-00001-of-00001-piece-00001.parquet.tmp")); !errors.Is(err, fs.ErrNotExist) {
 		t.Errorf("temporary part after a failed Close: got %v, want it removed", err)
 	}
 }
@@ -153,7 +153,7 @@ func TestResumeEqualsUninterrupted(t *testing.T) {
 		t.Fatal(err)
 	}
 	interrupt(t, stopped, results, RowGroupRows+123)
-	if got := names(t, stopped); !reflect.DeepEqual(got, []string{"part-00001-of-00001.parquet.partial"}) {
+	if got := names(t, stopped); !reflect.DeepEqual(got, []string{"_partial-part-00001-of-00001-piece-00001.parquet"}) {
 		t.Fatalf("after Abort: got files %v, want only the partial part", got)
 	}
 	w, err := Resume(stopped, testMeta)
@@ -183,15 +183,15 @@ func TestResumeEqualsUninterrupted(t *testing.T) {
 	if err := w.Close(); err != nil {
 		t.Fatal(err)
 	}
-	if got := names(t, stopped); !reflect.DeepEqual(got, []string{"part-00001-of-00001.parquet"}) {
+	if got := names(t, stopped); !reflect.DeepEqual(got, []string{"part-00001-of-00001-piece-00001.parquet"}) {
 		t.Errorf("after resumed Close: got files %v, want only the final part", got)
 	}
 	a, b := readAll(t, whole), readAll(t, stopped)
 	if !reflect.DeepEqual(a, b) {
 		t.Errorf("resumed rows differ from an uninterrupted run (%d vs %d rows)", len(b), len(a))
 	}
-	fa, _ := os.ReadFile(filepath.Join(whole, "part-00001-of-00001.parquet"))
-	fb, _ := os.ReadFile(filepath.Join(stopped, "part-00001-of-00001.parquet"))
+	fa, _ := os.ReadFile(filepath.Join(whole, "part-00001-of-00001-piece-00001.parquet"))
+	fb, _ := os.ReadFile(filepath.Join(stopped, "part-00001-of-00001-piece-00001.parquet"))
 	if !bytes.Equal(fa, fb) {
 		t.Errorf("resumed part is not byte-identical to the uninterrupted one (%d vs %d bytes)", len(fb), len(fa))
 	}
@@ -210,7 +210,7 @@ func TestResumeRefusesAnotherGrid(t *testing.T) {
 		t.Run(tc.name, func(t *testing.T) {
 			dir := t.TempDir()
 			interrupt(t, dir, sampleResults(10), 4)
-			before, _ := os.ReadFile(filepath.Join(dir, "part-00001-of-00001.parquet.partial"))
+			before, _ := os.ReadFile(filepath.Join(dir, "_partial-part-00001-of-00001-piece-00001.parquet"))
 			m := testMeta
 			tc.edit(&m)
 			_, err := Resume(dir, m)
@@ -218,7 +218,7 @@ func TestResumeRefusesAnotherGrid(t *testing.T) {
 			if !errors.As(err, &me) || me.Key != tc.key {
 				t.Fatalf("got %v, want a MismatchError on %s", err, tc.key)
 			}
-			after, _ := os.ReadFile(filepath.Join(dir, "part-00001-of-00001.parquet.partial"))
+			after, _ := os.ReadFile(filepath.Join(dir, "_partial-part-00001-of-00001-piece-00001.parquet"))
 			if got := names(t, dir); len(got) != 1 || !bytes.Equal(before, after) {
 				t.Errorf("after a refused resume: files %v, partial unchanged %v; want the partial alone, unchanged", got, bytes.Equal(before, after))
 			}
