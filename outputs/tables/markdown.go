@@ -55,9 +55,11 @@ func writeMarkdownGrid(w io.Writer, t *Table) {
 }
 
 // mdEscape keeps a table cell in one piece: pipes and newlines would break it.
-func mdEscape(s string) string {
-	return strings.NewReplacer("|", "\\|", "\n", " ").Replace(s)
-}
+func mdEscape(s string) string { return mdCell.Replace(s) }
+
+// mdCell is mdEscape's replacer, built once: a Replacer per call was the
+// largest allocation of a million-case tables pass.
+var mdCell = strings.NewReplacer("|", "\\|", "\n", " ")
 
 // section is one titled list of the page header.
 type section struct {
