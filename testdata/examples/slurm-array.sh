@@ -8,7 +8,7 @@
 #     "spansweep sweep --grid grid.toml --out /scratch/$USER/spansweep/out --tables-only"
 #
 # Array task K (1 … 8) runs shard K/8 and writes
-# $OUT/dataset/part-0000K-of-00008.parquet on the shared file system.
+# $OUT/dataset/part-0000K-of-00008-piece-PPPPP.parquet on the shared file system.
 # --signal sends SIGTERM 120 s before the time limit, so a task that runs
 # out of time keeps its finished cases; resubmitting the array with the
 # same command continues them (--resume).
