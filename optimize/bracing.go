@@ -28,18 +28,23 @@ func (d *designer) bracing() bool {
 			"the building has no support against longitudinal wind")
 		return false
 	}
-	roof, ok := d.chooseDiagonal(RoleRoofBracing, cands, solves, func(s bracingSolve) bayForces { return s.roof })
+	// The members are also checked under any further solves the joint
+	// choice of the purlins gives (frameAndBracing); the footings take the
+	// case's own solves only.
+	checked := append(slices.Clip(solves), d.alsoSolves...)
+	roof, ok := d.chooseDiagonal(RoleRoofBracing, cands, checked, func(s bracingSolve) bayForces { return s.roof })
 	if !ok {
 		return false
 	}
-	wall, ok := d.chooseDiagonal(RoleWallBracing, cands, solves, func(s bracingSolve) bayForces { return s.wall })
+	wall, ok := d.chooseDiagonal(RoleWallBracing, cands, checked, func(s bracingSolve) bayForces { return s.wall })
 	if !ok {
 		return false
 	}
-	strut, ok := d.designStruts(solves, l)
+	strut, ok := d.designStruts(checked, l)
 	if !ok {
 		return false
 	}
+	d.strut = strut
 	d.setBracingGroups(l, roof, wall, strut)
 	return true
 }
@@ -151,6 +156,9 @@ func (d *designer) setBracingGroups(l bracingLayout, roof, wall diagonalChoice, 
 	}
 	roofChecks = append(roofChecks, strut.verdict.checks...)
 	strutNote := fmt.Sprintf("purlins act as struts (%s), checked as simply supported beam-columns over one bay", strut.sec.Designation)
+	if len(d.alsoSolves) > 0 {
+		strutNote += "; struts and diagonals also checked under the bracing solves of the frame as it carries the lightest purlins (its restraint forces): the purlins are chosen with the strut upgrade, and this conservative extra check keeps that choice exact without designing every option"
+	}
 	if strut.extraKg > 0 {
 		strutNote += fmt.Sprintf("; upgraded from %s with %d bridging row(s) to %s with %d in the braced bays, %.1f kg added to this group",
 			d.purlin.Section.Designation, d.purlin.Bridging, strut.sec.Designation, strut.bridging, strut.extraKg)

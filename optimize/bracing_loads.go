@@ -29,6 +29,9 @@ type bracingSolve struct {
 	cas        bracingCase
 	direction  float64
 	roof, wall bayForces
+	// basis names the frame whose restraint forces the solve carries when
+	// it is not the case's own (frameAndBracing); empty for the own.
+	basis string
 }
 
 // dirName names the solve's direction.
@@ -45,10 +48,14 @@ func (s bracingSolve) label() string { return s.labelWith("0.9G") }
 
 // labelWith names the solve with the given permanent-action term.
 func (s bracingSolve) labelWith(g string) string {
+	label := fmt.Sprintf("ULS %s+Wu %s, end wall load %s", g, s.cas.name, s.dirName())
 	if s.cas.windCase < 0 {
-		return fmt.Sprintf("%s, frame restraint forces %s", s.cas.name, s.dirName())
+		label = fmt.Sprintf("%s, frame restraint forces %s", s.cas.name, s.dirName())
 	}
-	return fmt.Sprintf("ULS %s+Wu %s, end wall load %s", g, s.cas.name, s.dirName())
+	if s.basis != "" {
+		label += " (" + s.basis + ")"
+	}
+	return label
 }
 
 // bracingCases lists the longitudinal wind cases, each with the larger of
@@ -132,6 +139,14 @@ func (d *designer) solveBracingBays(l bracingLayout) ([]bracingSolve, error) {
 	wallSpec := analysis.BracingBaySpec{LengthMM: l.eavesM * 1e3, WidthMM: l.bayM * 1e3, Panels: l.wallPanels,
 		Chord: trussSection(d.frm.Column, 1000), Strut: trussSection(d.purlin.Section, 500), Diagonal: diag,
 		Support: analysis.CantileverBay}
+	roofBay, err := newBaySolver(roofSpec)
+	if err != nil {
+		return nil, err
+	}
+	wallBay, err := newBaySolver(wallSpec)
+	if err != nil {
+		return nil, err
+	}
 	shares := l.roofPanelShares()
 	roofR, wallR := d.restraintForcesN(l)
 	area := l.gableAreaM2()
@@ -146,7 +161,7 @@ func (d *designer) solveBracingBays(l bracingLayout) ([]bracingSolve, error) {
 				roof.chordB[i] = dir * roofR / float64(l.roofPanels+1)
 			}
 			var err error
-			if s.roof, err = solveBay(roofSpec, roof, s.label()+", roof"); err != nil {
+			if s.roof, err = roofBay.solve(roof, s.label()+", roof"); err != nil {
 				return nil, err
 			}
 			// The side wall under the eave with the larger reaction; the
@@ -158,7 +173,7 @@ func (d *designer) solveBracingBays(l bracingLayout) ([]bracingSolve, error) {
 			wall := bayLoads{chordA: make([]float64, l.wallPanels+1), chordB: make([]float64, l.wallPanels+1)}
 			wall.chordA[l.wallPanels] = top
 			wall.chordB[l.wallPanels] = dir * wallR
-			if s.wall, err = solveBay(wallSpec, wall, s.label()+", wall"); err != nil {
+			if s.wall, err = wallBay.solve(wall, s.label()+", wall"); err != nil {
 				return nil, err
 			}
 			out = append(out, s)

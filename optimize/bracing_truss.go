@@ -50,11 +50,31 @@ func trussSection(s catalog.Section, fallbackAreaMM2 float64) analysis.Section {
 // the diagonal's section: every candidate strap or rod is checked against
 // one solve.
 func solveBay(spec analysis.BracingBaySpec, loads bayLoads, name string) (bayForces, error) {
-	var ws analysis.Workspace
-	bay, err := analysis.NewBracingBay(spec)
+	b, err := newBaySolver(spec)
 	if err != nil {
 		return bayForces{}, err
 	}
+	return b.solve(loads, name)
+}
+
+// baySolver solves one bracing bay under one load after another: the bay
+// is built once and the solver's workspace reused.
+type baySolver struct {
+	bay *analysis.BracingBay
+	ws  analysis.Workspace
+}
+
+func newBaySolver(spec analysis.BracingBaySpec) (*baySolver, error) {
+	bay, err := analysis.NewBracingBay(spec)
+	if err != nil {
+		return nil, err
+	}
+	return &baySolver{bay: bay}, nil
+}
+
+// solve solves the bay under loads, as solveBay.
+func (b *baySolver) solve(loads bayLoads, name string) (bayForces, error) {
+	bay := b.bay
 	lc := analysis.LoadCase{Name: name}
 	for k, l := range [2][]float64{loads.chordA, loads.chordB} {
 		for i, fy := range l {
@@ -63,7 +83,7 @@ func solveBay(spec analysis.BracingBaySpec, loads bayLoads, name string) (bayFor
 			}
 		}
 	}
-	sol, err := ws.SolveTensionOnly(&bay.Frame, lc)
+	sol, err := b.ws.SolveTensionOnly(&bay.Frame, lc)
 	if err != nil {
 		return bayForces{}, fmt.Errorf("bracing bay %s: %w", name, err)
 	}
@@ -79,9 +99,9 @@ func solveBay(spec analysis.BracingBaySpec, loads bayLoads, name string) (bayFor
 	for i, m := range bay.Struts {
 		out.strutN[i] = -sol.AxialForce(comb, m)
 	}
-	n := spec.Panels
+	n := bay.Spec.Panels
 	supports := [2]int{bay.Chords[0][0], bay.Chords[0][n]}
-	if spec.Support == analysis.CantileverBay {
+	if bay.Spec.Support == analysis.CantileverBay {
 		supports = [2]int{bay.Chords[0][0], bay.Chords[1][0]}
 	}
 	for k, node := range supports {

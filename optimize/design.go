@@ -87,6 +87,16 @@ type designer struct {
 	// The bracing bays' solves and the layout they are for (solveBracing).
 	braceSolves []bracingSolve
 	braceLayout bracingLayout
+
+	// The purlin search, whose other arrangements the joint choice of the
+	// purlins and the braced bays' struts visits (joint.go); the strut
+	// upgrade the bracing step chose; the further solves the diagonals and
+	// struts are checked under (nil for none) and the objective an upgrade
+	// must stay below (0 for no limit), both set by frameAndBracing.
+	purlinLines lineDesign
+	strut       strutChoice
+	alsoSolves  []bracingSolve
+	strutBudget float64
 }
 
 // fail records the first failing member group and stops the design.

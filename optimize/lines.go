@@ -105,8 +105,8 @@ func (d *designer) purlins() bool {
 		maxSpacingM: c.Options.Cladding.MaxPurlinSpacingM, stepM: c.Options.Cladding.SpacingStepM,
 		deflectionRatio: c.Options.Limits.PurlinDeflectionRatio,
 	}
-	choice, ok := d.designLines(p)
-	d.purlin = choice
+	ld, ok := d.designLines(p)
+	d.purlin, d.purlinLines = ld.choice, ld
 	return ok
 }
 
@@ -134,29 +134,54 @@ func (d *designer) girts() bool {
 		maxSpacingM: c.Options.Cladding.MaxGirtSpacingM, stepM: c.Options.Cladding.SpacingStepM,
 		deflectionRatio: c.Options.Limits.GirtDeflectionRatio,
 	}
-	choice, ok := d.designLines(p)
-	d.girt = choice
+	ld, ok := d.designLines(p)
+	d.girt = ld.choice
 	return ok
 }
 
 func sq(x float64) float64 { return x * x }
 
+// lineDesign is a line search's outcome: the problem, its candidates, the
+// chosen candidate and arrangement, and how many candidates it checked.
+type lineDesign struct {
+	problem  lineProblem
+	cands    []catalog.Section
+	best     lineCandidate
+	choice   lineChoice
+	searched int
+	scan     lineScan
+}
+
 // designLines searches a line problem and records the chosen group.
-func (d *designer) designLines(p lineProblem) (lineChoice, bool) {
-	cands := d.lineSections(p.families)
-	if len(cands) == 0 {
+func (d *designer) designLines(p lineProblem) (lineDesign, bool) {
+	ld := lineDesign{problem: p, cands: d.lineSections(p.families)}
+	if len(ld.cands) == 0 {
 		d.fail(p.role, fmt.Sprintf("the catalogue has no section of the allowed families %v", p.families))
-		return lineChoice{}, false
+		return ld, false
 	}
-	best, bestFail, searched, err := d.searchLines(p, cands)
+	best, bestFail, searched, scan, err := d.searchLines(p, ld.cands)
 	if err != nil {
 		d.fail(p.role, err.Error())
-		return lineChoice{}, false
+		return ld, false
 	}
 	if best == nil {
 		d.fail(p.role, failReason(bestFail))
-		return lineChoice{}, false
+		return ld, false
 	}
+	ld.best, ld.searched, ld.scan = *best, searched, scan
+	ld.choice = d.adoptLine(p, ld.best, searched)
+	return ld, true
+}
+
+// lineChoiceOf is the arrangement a candidate lays out, for later steps.
+func lineChoiceOf(p lineProblem, c lineCandidate) lineChoice {
+	return lineChoice{Section: c.sec, SpacingM: c.arr.spacingM, PositionsM: p.positions(c.arr.gaps),
+		SpanType: c.arr.spanType, Bridging: c.arr.bridging}
+}
+
+// adoptLine stores a chosen candidate's member group and its working (in
+// place of an earlier choice for the same role) and returns its choice.
+func (d *designer) adoptLine(p lineProblem, best lineCandidate, searched int) lineChoice {
 	v := d.checkLine(p, best.arr, best.sec, true)
 	pieces, lengthEach := linePieces(best.arr.spanType, d.c.Bays, d.c.BaySpacingM)
 	lines := p.sides * best.arr.linesSide
@@ -166,12 +191,11 @@ func (d *designer) designLines(p lineProblem) (lineChoice, bool) {
 		Count: lines * pieces, LengthEachM: lengthEach, MassKg: best.massKg,
 		Governing: v.governing, DeflectionRatio: v.deflection,
 	})
-	d.record(GroupCalculation{
+	d.rerecord(GroupCalculation{
 		Role: p.role, Designation: best.sec.Designation, Checks: v.checks, Searched: searched,
 		Notes: lineNotes(p, best.arr, lines, pieces, lengthEach),
 	})
-	return lineChoice{Section: best.sec, SpacingM: best.arr.spacingM, PositionsM: p.positions(best.arr.gaps),
-		SpanType: best.arr.spanType, Bridging: best.arr.bridging}, true
+	return lineChoiceOf(p, best)
 }
 
 // failReason names the best failing candidate and the check that fails it.
@@ -192,35 +216,90 @@ type lineFailure struct {
 }
 
 // searchLines returns the lightest passing candidate over every
-// arrangement, the closest failure, and how many candidates it checked.
-func (d *designer) searchLines(p lineProblem, cands []catalog.Section) (*lineCandidate, *lineFailure, int, error) {
+// arrangement, the closest failure, how many candidates it checked, and
+// how far it went in each arrangement (for lineOptions).
+func (d *designer) searchLines(p lineProblem, cands []catalog.Section) (*lineCandidate, *lineFailure, int, lineScan, error) {
 	var best *lineCandidate
 	var closest *lineFailure
 	searched := 0
 	exhaustive := d.s != nil && d.s.Exhaustive
-	for _, arr := range d.arrangements(p) {
-		for _, sec := range cands {
-			cand := d.lineObjective(p, arr, sec)
-			if !exhaustive && best != nil && cand.objective >= best.objective {
-				break // every later candidate of this arrangement is heavier
-			}
-			searched++
-			v := d.checkLine(p, arr, sec, false)
-			if v.passes() {
-				if best == nil || cand.objective < best.objective {
-					best = &cand
-				}
-				if !exhaustive {
-					break
-				}
-				continue
-			}
+	scan := newLineScan(d.arrangements(p))
+	for i, arr := range scan.arrs {
+		n := scan.next(d, p, i, cands, func(cand lineCandidate) bool {
+			return !exhaustive && best != nil && cand.objective >= best.objective // every later candidate of this arrangement is heavier
+		}, func(cand lineCandidate, v lineVerdict) {
 			if closest == nil || v.governing.Utilisation < closest.verdict.governing.Utilisation {
-				closest = &lineFailure{arr: arr, sec: sec, verdict: v}
+				closest = &lineFailure{arr: arr, sec: cand.sec, verdict: v}
 			}
+		})
+		searched += n
+		if a := scan.answer[i]; a != nil && (best == nil || a.objective < best.objective) {
+			best = a
 		}
 	}
-	return best, closest, searched, nil
+	return best, closest, searched, scan, nil
+}
+
+// lineScan is how far a line search went in each arrangement: the next
+// candidate to check and the lightest passing one once found, so that a
+// later search of the same problem (lineOptions) goes on from there.
+type lineScan struct {
+	arrs   []arrangement
+	from   []int
+	answer []*lineCandidate
+}
+
+func newLineScan(arrs []arrangement) lineScan {
+	return lineScan{arrs: arrs, from: make([]int, len(arrs)), answer: make([]*lineCandidate, len(arrs))}
+}
+
+// next goes on checking arrangement i's candidates, lightest first, until
+// one passes (with Settings.Exhaustive, through every candidate, keeping
+// the lightest passing) or stop says the next need not be checked, calling
+// failed for each that fails. It returns how many it checked.
+func (s *lineScan) next(d *designer, p lineProblem, i int, cands []catalog.Section,
+	stop func(lineCandidate) bool, failed func(lineCandidate, lineVerdict)) int {
+	exhaustive := d.s != nil && d.s.Exhaustive
+	searched := 0
+	for ; s.from[i] < len(cands); s.from[i]++ {
+		if s.answer[i] != nil && !exhaustive {
+			break
+		}
+		cand := d.lineObjective(p, s.arrs[i], cands[s.from[i]])
+		if stop(cand) {
+			break
+		}
+		searched++
+		v := d.checkLine(p, s.arrs[i], cand.sec, false)
+		if !v.passes() {
+			failed(cand, v)
+			continue
+		}
+		if s.answer[i] == nil || cand.objective < s.answer[i].objective {
+			s.answer[i] = &cand
+		}
+	}
+	return searched
+}
+
+// lineOptions goes on with a line search (scan) and lists every
+// arrangement's answer, its lightest passing section, whose objective is
+// below limit, lightest first (ties in arrangement order, as searchLines
+// breaks them). With Settings.Exhaustive the search has checked every
+// candidate and limit is not applied.
+func (d *designer) lineOptions(p lineProblem, cands []catalog.Section, scan *lineScan, limit float64) []lineCandidate {
+	exhaustive := d.s != nil && d.s.Exhaustive
+	var out []lineCandidate
+	for i := range scan.arrs {
+		scan.next(d, p, i, cands, func(cand lineCandidate) bool {
+			return !exhaustive && cand.objective >= limit // every later candidate of this arrangement is heavier
+		}, func(lineCandidate, lineVerdict) {})
+		if a := scan.answer[i]; a != nil && (exhaustive || a.objective < limit) {
+			out = append(out, *a)
+		}
+	}
+	slices.SortStableFunc(out, func(a, b lineCandidate) int { return cmpFloat(a.objective, b.objective) })
+	return out
 }
 
 // arrangements lists the layouts to try: spacings from the cladding's

@@ -2,9 +2,11 @@ package optimize
 
 // run designs the member groups in dependency order and totals the masses.
 // Each step returns false when its group has no passing candidate; the
-// design stops there with the reason recorded by fail.
+// design stops there with the reason recorded by fail. The frame and the
+// bracing are one step: the purlins may change with the braced bays'
+// struts (frameAndBracing).
 func (d *designer) run() {
-	steps := []func() bool{d.purlins, d.girts, d.frame, d.bracing, d.endWalls, d.footings}
+	steps := []func() bool{d.purlins, d.girts, d.frameAndBracing, d.endWalls, d.footings}
 	for _, step := range steps {
 		if !step() {
 			return
