@@ -12,6 +12,7 @@ import "fmt"
 // pair no longer passes; err is an analysis error.
 func (d *designer) recheckFrame(f frameChoice) (bool, error) {
 	m, err := d.newFrameModel()
+	defer m.release()
 	if err != nil {
 		return false, fmt.Errorf("frame model: %w", err)
 	}
