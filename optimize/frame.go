@@ -127,9 +127,7 @@ func (m *frameModel) candidates() []frameCandidate {
 			}
 		}
 	}
-	g := &m.g
-	minBrace := 2 * m.brace0.MassKgPerM * m.kneeBraceLengthMM(analysis.KneeBrace{
-		ColumnMM: kneeColumnMin * g.heightMM, RafterMM: kneeRafterMin * g.rafterMM}) / 1e3
+	minBrace := m.minKneeBraceKg()
 	variants := 1
 	if m.d.c.Options.Members.KneeBraces {
 		variants = 2
@@ -143,16 +141,34 @@ func (m *frameModel) candidates() []frameCandidate {
 				continue
 			}
 			pair++
-			cd := frameCandidate{rafter: r, column: c, rCap: caps[i], cCap: caps[j], pair: pair,
-				massLB: 2*g.rafterMM/1e3*r.MassKgPerM + 2*g.heightMM/1e3*c.MassKgPerM}
-			out = append(out, cd)
-			if variants == 2 {
-				cd.braced, cd.massLB = true, cd.massLB+minBrace
-				out = append(out, cd)
-			}
+			out = m.appendPair(out, r, c, caps[i], caps[j], pair, variants == 2, minBrace)
 		}
 	}
 	return out
+}
+
+// appendPair appends the candidates of one rafter and column pair: the
+// unbraced one and, if braced is set, the knee-braced one (minBraceKg more
+// in its bound).
+func (m *frameModel) appendPair(out []frameCandidate, r, c *catalog.Section, rCap, cCap *coldformed.Capacities,
+	pair int, braced bool, minBraceKg float64) []frameCandidate {
+	g := &m.g
+	cd := frameCandidate{rafter: r, column: c, rCap: rCap, cCap: cCap, pair: pair,
+		massLB: 2*g.rafterMM/1e3*r.MassKgPerM + 2*g.heightMM/1e3*c.MassKgPerM}
+	out = append(out, cd)
+	if braced {
+		cd.braced, cd.massLB = true, cd.massLB+minBraceKg
+		out = append(out, cd)
+	}
+	return out
+}
+
+// minKneeBraceKg is the least knee-brace steel of a frame (both braces,
+// the lightest C at the shortest placement): the braced candidates' bound.
+func (m *frameModel) minKneeBraceKg() float64 {
+	g := &m.g
+	return 2 * m.brace0.MassKgPerM * m.kneeBraceLengthMM(analysis.KneeBrace{
+		ColumnMM: kneeColumnMin * g.heightMM, RafterMM: kneeRafterMin * g.rafterMM}) / 1e3
 }
 
 // candidateQueue yields candidates in order of their mass lower bound, ties

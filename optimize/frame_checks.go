@@ -266,9 +266,9 @@ func flangeIndex(outer bool) int {
 
 // kept returns cs with its own copy of the check list (worstSegment's is
 // in a reused buffer): the whole list when all is set (a member's
-// governing segment, and every segment of a recorded calculation), else
-// the governing check alone, which is all the other segments' utilisations
-// and verdicts read.
+// governing segment in a full check, and every segment of a recorded
+// calculation), else the governing check alone, which is all a verdict,
+// a utilisation or a failure's reason reads.
 func (cs checkedSegment) kept(all bool) checkedSegment {
 	switch {
 	case cs.res.Checks == nil:

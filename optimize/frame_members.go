@@ -78,7 +78,7 @@ func (m *frameModel) evaluateMember(s *memberSpec, l *lambdas, mode flyMode, giv
 				for _, cs := range [2]checkedSegment{o, i} {
 					gov := cs.util > out.util || !haveGov
 					if gov || record {
-						cs = cs.kept(gov || m.d.r.Calculation != nil)
+						cs = cs.kept(gov && record || m.d.r.Calculation != nil)
 					}
 					if gov {
 						out.util, out.gov, haveGov = cs.util, cs, true

@@ -16,15 +16,14 @@ func (d *designer) recheckFrame(f frameChoice) (bool, error) {
 	if err != nil {
 		return false, fmt.Errorf("frame model: %w", err)
 	}
-	var pair []frameCandidate
-	for _, cd := range m.candidates() {
-		if cd.rafter.Designation == f.Rafter.Designation && cd.column.Designation == f.Column.Designation {
-			pair = append(pair, cd)
-		}
-	}
-	if len(pair) == 0 {
+	// The pair's candidates as the frame step lists them (frameModel.candidates).
+	r, c := f.Rafter, f.Column
+	rCap, err1 := m.caps.of(r)
+	cCap, err2 := m.caps.of(c)
+	if err1 != nil || err2 != nil || rCap == nil || cCap == nil {
 		return false, nil
 	}
+	pair := m.appendPair(nil, &r, &c, rCap, cCap, 1, d.c.Options.Members.KneeBraces, m.minKneeBraceKg())
 	spent := d.r.Analyses
 	best := searchResult{cd: pair[0]}
 	if len(pair) > 1 {
