@@ -6,6 +6,7 @@ import (
 	"os"
 	"os/signal"
 	"runtime"
+	"runtime/debug"
 	"syscall"
 
 	"github.com/spf13/pflag"
@@ -101,7 +102,27 @@ func runSweep(args []string, stdout, stderr io.Writer) error {
 	if s.flags.tablesOnly {
 		return s.withProfiles(func() error { return s.tablesOnly(stdout, stderr) })
 	}
+	tuneGC()
 	return s.sweep(ctx, stdout, stderr)
+}
+
+// Garbage collector settings of a sweep, unless GOGC or GOMEMLIMIT is set:
+// the heap may grow to three times the live data before a collection
+// (GOGC=200; the default 100 spent about 8 % more CPU on the default grid),
+// and the collector works harder from sweepGCSoftLimit on, so the peak stays
+// well under the 300 MB a sweep of any size is meant to fit in.
+const (
+	sweepGCPercent   = 200
+	sweepGCSoftLimit = 200 << 20
+)
+
+func tuneGC() {
+	if os.Getenv("GOGC") == "" {
+		debug.SetGCPercent(sweepGCPercent)
+	}
+	if os.Getenv("GOMEMLIMIT") == "" {
+		debug.SetMemoryLimit(sweepGCSoftLimit)
+	}
 }
 
 // parseSweep reads and validates the command line, the grid, the catalogue
