@@ -224,8 +224,10 @@ func (d *designer) designStruts(solves []bracingSolve, l bracingLayout) (strutCh
 // (not even with Settings.Exhaustive: the budget is the caller's bound).
 func (d *designer) strutUpgrade(solves []bracingSolve, l bracingLayout, budget float64) (strutChoice, strutVerdict, bool) {
 	p := d.purlin.Section
-	cands := []catalog.Section{p} // the chosen purlin first, then heavier sections of its families
-	for _, sec := range d.lineSections(d.c.Options.Members.PurlinFamilies) {
+	secs := d.lineSections(d.c.Options.Members.PurlinFamilies)
+	cands := make([]catalog.Section, 1, 1+len(secs))
+	cands[0] = p // the chosen purlin first, then heavier sections of its families
+	for _, sec := range secs {
 		if sec.MassKgPerM >= p.MassKgPerM && sec.Designation != p.Designation &&
 			d.pricePerKg(sec.Designation)*sec.MassKgPerM >= d.pricePerKg(p.Designation)*p.MassKgPerM {
 			cands = append(cands, sec)

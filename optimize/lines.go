@@ -440,7 +440,7 @@ func (d *designer) lineActions(p lineProblem, arr arrangement, sec catalog.Secti
 	if s*d.c.BaySpacingM <= p.localAreaM2 {
 		wout = p.pressures.EdgeOutward
 	}
-	var out []lineAction
+	out := make([]lineAction, 0, 8)
 	if p.gravityNormal > 0 {
 		out = append(out, lineAction{name: "ULS 1.35G", limitState: actions.ULS, wNmm: 1.35 * g})
 	}
@@ -457,17 +457,23 @@ func (d *designer) lineActions(p lineProblem, arr arrangement, sec catalog.Secti
 	}
 	// On a wall the cladding's weight does not load the girt's major axis,
 	// so the wind combinations carry no G term and are named so.
-	gIn, gOut, gS := "1.2G+", "0.9G+", "G+"
+	names := &roofWindNames
 	if p.gravityNormal == 0 {
-		gIn, gOut, gS = "", "", ""
+		names = &wallWindNames
 	}
 	out = append(out,
-		lineAction{name: "ULS " + gIn + "Wu inward", limitState: actions.ULS, wNmm: 1.2*g + win.ULSKPa*s},
-		lineAction{name: "ULS " + gOut + "Wu outward", limitState: actions.ULS, wNmm: 0.9*g + wout.ULSKPa*s},
-		lineAction{name: "SLS " + gS + "Ws inward", limitState: actions.SLS, wNmm: g + win.SLSKPa*s},
-		lineAction{name: "SLS " + gS + "Ws outward", limitState: actions.SLS, wNmm: g + wout.SLSKPa*s})
+		lineAction{name: names[0], limitState: actions.ULS, wNmm: 1.2*g + win.ULSKPa*s},
+		lineAction{name: names[1], limitState: actions.ULS, wNmm: 0.9*g + wout.ULSKPa*s},
+		lineAction{name: names[2], limitState: actions.SLS, wNmm: g + win.SLSKPa*s},
+		lineAction{name: names[3], limitState: actions.SLS, wNmm: g + wout.SLSKPa*s})
 	return out
 }
+
+// The wind combinations' names on a roof and on a wall (no G term there).
+var (
+	roofWindNames = [4]string{"ULS 1.2G+Wu inward", "ULS 0.9G+Wu outward", "SLS G+Ws inward", "SLS G+Ws outward"}
+	wallWindNames = [4]string{"ULS Wu inward", "ULS Wu outward", "SLS Ws inward", "SLS Ws outward"}
+)
 
 // checkLine checks one section in one arrangement under every combination.
 // With keep it also returns every check for the report.
