@@ -164,6 +164,7 @@ func measureGrid(o *options, rep *report) error {
 		cases = min(cases, o.limit)
 	}
 	sample := sampleCases(g, cases)
+	sweepGC()
 	rep.Grid, rep.Cases, rep.GridCases, rep.Memo = g.File, len(sample), g.Count(), o.memo
 	for i, w := range o.workers {
 		wr, times, state := timeCases(sample, cat, w, o.memo)

@@ -2,6 +2,8 @@ package main
 
 import (
 	"context"
+	"os"
+	"runtime/debug"
 	"slices"
 	"sort"
 	"strings"
@@ -36,6 +38,18 @@ type designState struct {
 	// Memo counts the memo's look-ups (zero without --memo).
 	Memo     optimize.MemoStats `json:"memo"`
 	FailedAt map[string]int     `json:"failed_at"` // no-solution cases by the member group named first in the reason
+}
+
+// sweepGC sets the garbage collector as spansweep sweep does (its tuneGC:
+// GOGC 200 and a 200 MB soft limit unless GOGC or GOMEMLIMIT is set), so the
+// figures are the sweep's.
+func sweepGC() {
+	if os.Getenv("GOGC") == "" {
+		debug.SetGCPercent(200)
+	}
+	if os.Getenv("GOMEMLIMIT") == "" {
+		debug.SetMemoryLimit(200 << 20)
+	}
 }
 
 // timeCases designs cases through the engine with the given worker count,
