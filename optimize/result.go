@@ -121,7 +121,7 @@ type Result struct {
 	SteelMassKg      float64 // every member group
 	MassPerFloorKgM2 float64 // steel mass over span × length
 	Cost             float64 // from the grid's price table; 0 without one
-	Analyses         int     // frame analyses the search ran
+	Analyses         int     // frame analyses the search ran (a memo replay counts those of the search replayed)
 
 	// Calculation is the full working, kept only with Settings.Record.
 	Calculation *Calculation

@@ -61,7 +61,7 @@ var columnDocs = map[string]string{
 	"steel_mass_kg":              "steel mass of every member group, kg",
 	"mass_per_floor_kg_m2":       "steel mass over span × length, kg/m²",
 	"cost":                       "cost from the grid's price table (0 without one)",
-	"analyses":                   "frame analyses the search ran",
+	"analyses":                   "frame analyses the search ran (a frame the memo replays counts those of the search replayed)",
 	"status":                     "ok or no_solution",
 	"reason":                     "why there is no solution (empty when ok)",
 	"grid_sha256":                "SHA-256 of the grid file's content",
