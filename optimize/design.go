@@ -23,6 +23,18 @@ type Settings struct {
 	// case with exactly the same inputs (see Memo); one Memo serves one
 	// catalogue. It is not used with Exhaustive or Record. Default nil.
 	Memo *Memo
+
+	// recheckMemo is the memo a trial of the joint purlin choice, which
+	// runs without Memo, keeps its frame re-checks in (trialSettings).
+	recheckMemo *Memo
+}
+
+// rechecks returns the Memo for frame re-checks, or nil.
+func (s *Settings) rechecks() *Memo {
+	if s != nil && s.recheckMemo != nil {
+		return s.recheckMemo
+	}
+	return s.memo()
 }
 
 // memo returns the Memo to use, or nil.

@@ -24,12 +24,22 @@ type acceptedFrame struct {
 // calculation. It reports the analyses it spent since spent (the count
 // when the search began) to the memo, if any, under key.
 func (m *frameModel) accept(best searchResult, memo *Memo, key memoKey, spent int) bool {
+	var store func(memoKey, frameMemo)
+	if memo != nil {
+		store = memo.storeFrame
+	}
+	return m.acceptInto(best, store, key, spent)
+}
+
+// acceptInto is accept with the memo's store given as a function (nil:
+// none), so that a frame re-check keeps its own table.
+func (m *frameModel) acceptInto(best searchResult, store func(memoKey, frameMemo), key memoKey, spent int) bool {
 	a, ok := m.finalise(best)
 	if !ok {
 		return false
 	}
-	if memo != nil {
-		memo.storeFrame(key, frameMemo{accepted: a, analyses: m.d.r.Analyses - spent})
+	if store != nil {
+		store(key, frameMemo{accepted: a, analyses: m.d.r.Analyses - spent})
 	}
 	m.publish(&a)
 	if m.d.r.Calculation != nil {

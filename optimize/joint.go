@@ -365,13 +365,14 @@ func (t *roofTrial) lowerSolves() []bracingSolve {
 
 // trialSettings are the settings for the options after the first: the
 // same without the sweep's memo, which keeps to the one frame look-up per
-// case that the frame step makes (a frame designed without it is the same).
+// case that the frame step makes (a frame designed without it is the same);
+// their frame re-checks still go through its own table (recheckFrame).
 func (d *designer) trialSettings() *Settings {
 	var s Settings
 	if d.s != nil {
 		s = *d.s
 	}
-	s.Memo = nil
+	s.recheckMemo, s.Memo = s.memo(), nil
 	return &s
 }
 

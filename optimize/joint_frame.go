@@ -23,6 +23,15 @@ func (d *designer) recheckFrame(f frameChoice) (bool, error) {
 	if err1 != nil || err2 != nil || rCap == nil || cCap == nil {
 		return false, nil
 	}
+	memo, key := d.s.rechecks(), memoKey{}
+	if memo != nil {
+		key = m.recheckKey(r.Designation, c.Designation)
+		if f, ok := memo.recheck(key); ok {
+			d.r.Analyses += f.analyses
+			m.publish(&f.accepted)
+			return true, nil
+		}
+	}
 	pair := m.appendPair(nil, &r, &c, rCap, cCap, 1, d.c.Options.Members.KneeBraces, m.minKneeBraceKg())
 	spent := d.r.Analyses
 	best := searchResult{cd: pair[0]}
@@ -32,5 +41,5 @@ func (d *designer) recheckFrame(f frameChoice) (bool, error) {
 			return false, err
 		}
 	}
-	return m.accept(best, nil, memoKey{}, spent), nil
+	return m.acceptInto(best, memo.recheckStore(), key, spent), nil
 }

@@ -31,6 +31,7 @@ type Memo struct {
 
 	mu       sync.Mutex
 	frames   memoTable[frameMemo]
+	rechecks memoTable[frameMemo] // frame re-checks of the joint purlin choice
 	footings memoTable[footingMemo]
 	stats    MemoStats
 }
@@ -38,6 +39,7 @@ type Memo struct {
 // MemoStats counts a Memo's look-ups.
 type MemoStats struct {
 	FrameHits, FrameMisses     int
+	RecheckHits, RecheckMisses int // frame re-checks under other purlins (joint.go)
 	FootingHits, FootingMisses int
 }
 
@@ -100,12 +102,52 @@ func (mm *Memo) frame(key memoKey) (frameMemo, bool) {
 }
 
 func (mm *Memo) storeFrame(key memoKey, f frameMemo) {
-	o := &f.accepted.o
-	o.rafter = memberOutcome{fly: slices.Clone(o.rafter.fly)}
-	o.column = memberOutcome{fly: slices.Clone(o.column.fly)}
+	slim(&f)
 	mm.mu.Lock()
 	defer mm.mu.Unlock()
 	mm.frames.put(key, f, mm.limit())
+}
+
+// recheck looks up a frame re-check (designer.recheckFrame).
+func (mm *Memo) recheck(key memoKey) (frameMemo, bool) {
+	mm.mu.Lock()
+	defer mm.mu.Unlock()
+	f, ok := mm.rechecks.get(key)
+	if ok {
+		mm.stats.RecheckHits++
+	} else {
+		mm.stats.RecheckMisses++
+	}
+	return f, ok
+}
+
+// recheckStore returns the store of frame re-checks, or nil for a nil Memo.
+func (mm *Memo) recheckStore() func(memoKey, frameMemo) {
+	if mm == nil {
+		return nil
+	}
+	return func(key memoKey, f frameMemo) {
+		slim(&f)
+		mm.mu.Lock()
+		defer mm.mu.Unlock()
+		mm.rechecks.put(key, f, mm.limit())
+	}
+}
+
+// recheckKey is frameKey with the pair a re-check checks: a different
+// problem from the frame search of the same frame, so a different key.
+func (m *frameModel) recheckKey(rafter, column string) memoKey {
+	k := keyWriter{b: m.frameKeyBytes(make([]byte, 0, 8192))}
+	k.s("re-check", rafter, column)
+	return k.sum()
+}
+
+// slim drops the check lists of a stored frame: a replay reads the fly
+// braces and the governing checks already taken from them.
+func slim(f *frameMemo) {
+	o := &f.accepted.o
+	o.rafter = memberOutcome{fly: slices.Clone(o.rafter.fly)}
+	o.column = memberOutcome{fly: slices.Clone(o.column.fly)}
 }
 
 // footingMemo is a pad design's outcome (checks/footing.Design is a pure
@@ -185,7 +227,7 @@ func (k *keyWriter) s(vs ...string) {
 	}
 }
 
-func (k *keyWriter) sum() memoKey { return sha256.Sum256(k.b) }
+func (k keyWriter) sum() memoKey { return sha256.Sum256(k.b) }
 
 func (k *keyWriter) fs(vs []float64) {
 	k.i(len(vs))
@@ -196,7 +238,12 @@ func (k *keyWriter) fs(vs []float64) {
 // restraint lines and base, its load cases and combinations, and the grid's
 // frame options and limits. The catalogue is the Memo's own (Settings).
 func (m *frameModel) frameKey() memoKey {
-	k := keyWriter{b: make([]byte, 0, 8192)}
+	return keyWriter{b: m.frameKeyBytes(make([]byte, 0, 8192))}.sum()
+}
+
+// frameKeyBytes appends frameKey's inputs to b.
+func (m *frameModel) frameKeyBytes(b []byte) []byte {
+	k := keyWriter{b: b}
 	c := m.d.c
 	g := &m.g
 	k.s(c.Base)
@@ -223,7 +270,7 @@ func (m *frameModel) frameKey() memoKey {
 	}
 	k.i(len(m.uls))
 	k.i(m.uls...)
-	return k.sum()
+	return k.b
 }
 
 func writeLoadCase(k *keyWriter, lc *analysis.LoadCase) {

@@ -73,6 +73,7 @@ func (r *report) writeText(w io.Writer) {
 			line("memo", "on: sub-searches with inputs equal to an earlier case's replayed, as sweep runs")
 			m := r.Design.Memo
 			line("memo: frames replayed", "%d of %d", m.FrameHits, m.FrameHits+m.FrameMisses)
+			line("memo: frame re-checks replayed", "%d of %d (the joint purlin choice's other purlins)", m.RecheckHits, m.RecheckHits+m.RecheckMisses)
 			line("memo: pad designs replayed", "%d of %d", m.FootingHits, m.FootingHits+m.FootingMisses)
 		} else {
 			line("memo", "off: every search run in full")
