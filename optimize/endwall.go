@@ -139,13 +139,7 @@ func (d *designer) checkMullion(e endWallLayout, sec catalog.Section, girtSpacin
 		}
 		d.checkBuf = res.Checks
 		res.SetCombination(a.name)
-		var lines []CheckLine
-		if keep {
-			for _, c := range res.Checks {
-				lines = append(lines, checkLineOf("end-wall column "+sec.Designation, c))
-			}
-		}
-		take(governingOf(res.Governing()), lines...)
+		take(governingOf(res.Governing()), keptLines(keep, "end-wall column "+sec.Designation, res)...)
 	}
 	return v
 }

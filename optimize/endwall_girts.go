@@ -86,13 +86,7 @@ func (d *designer) checkEndWallGirt(sec catalog.Section, spanM, spacingM float64
 		}
 		d.checkBuf = res.Checks
 		res.SetCombination(a.name)
-		var lines []CheckLine
-		if keep {
-			for _, c := range res.Checks {
-				lines = append(lines, checkLineOf(name, c))
-			}
-		}
-		take(governingOf(res.Governing()), lines...)
+		take(governingOf(res.Governing()), keptLines(keep, name, res)...)
 	}
 	ratio := d.c.Options.Limits.GirtDeflectionRatio
 	for _, a := range []struct {
@@ -134,4 +128,17 @@ func (d *designer) designEndWallGirts(l bracingLayout, e endWallLayout, spacingM
 			"bolted through the web to cleats: web bearing does not apply; no bridging",
 		}})
 	return true
+}
+
+// keptLines is a member check's report lines when they are kept, else none
+// (building them for every candidate tried would be wasted).
+func keptLines(keep bool, member string, res coldformed.MemberResult) []CheckLine {
+	if !keep {
+		return nil
+	}
+	lines := make([]CheckLine, 0, len(res.Checks))
+	for _, c := range res.Checks {
+		lines = append(lines, checkLineOf(member, c))
+	}
+	return lines
 }

@@ -90,15 +90,20 @@ type frameMemo struct {
 }
 
 func (mm *Memo) frame(key memoKey) (frameMemo, bool) {
+	return memoGet(mm, &mm.frames, key, &mm.stats.FrameHits, &mm.stats.FrameMisses)
+}
+
+// memoGet looks key up in table t of mm, counting the hit or the miss.
+func memoGet[V any](mm *Memo, t *memoTable[V], key memoKey, hits, misses *int) (V, bool) {
 	mm.mu.Lock()
 	defer mm.mu.Unlock()
-	f, ok := mm.frames.get(key)
+	v, ok := t.get(key)
 	if ok {
-		mm.stats.FrameHits++
+		*hits++
 	} else {
-		mm.stats.FrameMisses++
+		*misses++
 	}
-	return f, ok
+	return v, ok
 }
 
 func (mm *Memo) storeFrame(key memoKey, f frameMemo) {
@@ -110,15 +115,7 @@ func (mm *Memo) storeFrame(key memoKey, f frameMemo) {
 
 // recheck looks up a frame re-check (designer.recheckFrame).
 func (mm *Memo) recheck(key memoKey) (frameMemo, bool) {
-	mm.mu.Lock()
-	defer mm.mu.Unlock()
-	f, ok := mm.rechecks.get(key)
-	if ok {
-		mm.stats.RecheckHits++
-	} else {
-		mm.stats.RecheckMisses++
-	}
-	return f, ok
+	return memoGet(mm, &mm.rechecks, key, &mm.stats.RecheckHits, &mm.stats.RecheckMisses)
 }
 
 // recheckStore returns the store of frame re-checks, or nil for a nil Memo.
@@ -177,14 +174,7 @@ func designFooting(memo *Memo, b footing.Base) (footing.Footing, error) {
 		return footing.Design(b, &padOptions, nil)
 	}
 	key := footingKey(&b)
-	memo.mu.Lock()
-	f, ok := memo.footings.get(key)
-	if ok {
-		memo.stats.FootingHits++
-	} else {
-		memo.stats.FootingMisses++
-	}
-	memo.mu.Unlock()
+	f, ok := memoGet(memo, &memo.footings, key, &memo.stats.FootingHits, &memo.stats.FootingMisses)
 	if ok {
 		return f.f, f.err
 	}
