@@ -26,14 +26,10 @@ var ErrNothingToResume = errors.New("dataset: nothing to resume")
 // equals that of an uninterrupted run. On a mismatch it returns a
 // *MismatchError and leaves every file as it was.
 func Resume(dir string, meta Meta, opts ...Option) (*Writer, error) {
-	l, err := newLayout(opts)
+	l, meta, err := prepare(meta, opts)
 	if err != nil {
 		return nil, err
 	}
-	if err := meta.Shard.validate(); err != nil {
-		return nil, err
-	}
-	meta.Shard = meta.Shard.norm()
 	paths, err := shardPieces(dir, meta.Shard)
 	if err != nil {
 		return nil, err

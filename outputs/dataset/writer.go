@@ -88,19 +88,29 @@ type Writer struct {
 	closed                bool
 }
 
+// prepare reads Create's and Resume's options and checks and normalises
+// meta's shard.
+func prepare(meta Meta, opts []Option) (layout, Meta, error) {
+	l, err := newLayout(opts)
+	if err != nil {
+		return l, meta, err
+	}
+	if err := meta.Shard.validate(); err != nil {
+		return l, meta, err
+	}
+	meta.Shard = meta.Shard.norm()
+	return l, meta, nil
+}
+
 // Create starts a new run of meta.Shard in dir, creating dir if needed.
 // Files an earlier run of the shard left (finished or partial pieces) are
 // replaced or removed only when Close succeeds; until then a partial piece
 // of the same number is replaced as this run finishes its own.
 func Create(dir string, meta Meta, opts ...Option) (*Writer, error) {
-	l, err := newLayout(opts)
+	l, meta, err := prepare(meta, opts)
 	if err != nil {
 		return nil, err
 	}
-	if err := meta.Shard.validate(); err != nil {
-		return nil, err
-	}
-	meta.Shard = meta.Shard.norm()
 	if err := os.MkdirAll(dir, 0o755); err != nil {
 		return nil, fmt.Errorf("dataset: create directory: %w", err)
 	}
