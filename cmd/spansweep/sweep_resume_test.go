@@ -120,15 +120,7 @@ func TestSweepExistingOutput(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			r := f.sweep("out", tt.args...)
-			if r.code != exitUsage {
-				t.Fatalf("got exit %d, want 2; stderr:\n%s", r.code, r.errs)
-			}
-			for _, w := range tt.wants {
-				if !strings.Contains(r.errs, w) {
-					t.Errorf("stderr lacks %q:\n%s", w, r.errs)
-				}
-			}
+			f.sweep("out", tt.args...).wantRefused(t, tt.wants)
 			if after, _ := os.ReadFile(part); !bytes.Equal(after, before) {
 				t.Errorf("the finished part changed")
 			}

@@ -101,6 +101,20 @@ type sweepResult struct {
 	stdout, errs string
 }
 
+// wantRefused requires a bad-input exit (status 2) whose standard error
+// holds every one of wants; a wrong status ends the test.
+func (r sweepResult) wantRefused(t *testing.T, wants []string) {
+	t.Helper()
+	if r.code != exitUsage {
+		t.Fatalf("got exit %d, want 2; stderr:\n%s", r.code, r.errs)
+	}
+	for _, w := range wants {
+		if !strings.Contains(r.errs, w) {
+			t.Errorf("stderr lacks %q:\n%s", w, r.errs)
+		}
+	}
+}
+
 // sweep runs "spansweep sweep --grid <fixture> --out <dir/out> args...".
 func (f *sweepFixture) sweep(out string, args ...string) sweepResult {
 	f.t.Helper()
